@@ -1,0 +1,60 @@
+import cookieParser from 'cookie-parser';
+import express, { type Express } from 'express';
+import fs from 'node:fs';
+import path from 'node:path';
+import type { Sequelize } from 'sequelize';
+import type { Config } from './config';
+import { authenticate } from './middleware/authenticate';
+import { apiNotFound, errorHandler } from './middleware/error-handler';
+import { authRouter } from './routes/auth';
+import { fittingsRouter } from './routes/fittings';
+import { healthRouter } from './routes/health';
+import { playersRouter } from './routes/players';
+import { teamRouter } from './routes/team';
+import type { Mailer } from './services/mailer';
+
+export interface AppDeps {
+  sequelize: Sequelize;
+  config: Config;
+  mailer?: Mailer;
+  /** Serve the exported web app from config.webDist (production start). */
+  serveWeb?: boolean;
+  log?: (message: string, error: unknown) => void;
+}
+
+/** Builds the Express app; listening is the caller's business (server/index.ts, tests). */
+export function createApp({ sequelize, config, serveWeb = false, log }: AppDeps): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  if (config.trustProxy) app.set('trust proxy', 1);
+
+  const api = express.Router();
+  api.use(express.json({ limit: '1mb' }));
+  api.use(cookieParser());
+  api.use((_req, res, next) => {
+    res.set('Cache-Control', 'no-store');
+    next();
+  });
+  api.use('/health', healthRouter(sequelize));
+  api.use(authRouter(config));
+  api.use('/players', authenticate(config), playersRouter());
+  api.use('/fittings', authenticate(config), fittingsRouter());
+  api.use('/team', authenticate(config), teamRouter());
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  if (serveWeb) {
+    const root = path.resolve(config.webDist);
+    const index = path.join(root, 'index.html');
+    app.use(express.static(root, { index: false, maxAge: '1h' }));
+    // SPA fallback: paths without a file extension get the app's index.html.
+    app.get('/{*splat}', (req, res, next) => {
+      if (path.extname(req.path) || !fs.existsSync(index)) return next();
+      res.set('Cache-Control', 'no-cache');
+      res.sendFile(index);
+    });
+  }
+
+  app.use(errorHandler(log));
+  return app;
+}

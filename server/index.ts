@@ -1,0 +1,41 @@
+import type { Server } from 'node:http';
+import { createApp } from './app';
+import { loadConfig } from './config';
+import { createSequelize } from './db';
+import { migrateUp } from './migrate';
+import { createMailer } from './services/mailer';
+import { demoSignInHint, seedDemo } from './seed/demo';
+
+async function main(): Promise<void> {
+  const config = loadConfig();
+  const sequelize = createSequelize(config.db);
+  await sequelize.authenticate();
+  const applied = await migrateUp(sequelize);
+  if (applied.length) console.log(`Migrations applied: ${applied.join(', ')}`);
+  if (process.env.DEMO_SEED === '1') {
+    const seeded = await seedDemo(sequelize, new Date());
+    console.log(seeded ? 'Demo data loaded into the empty database.' : 'Database has data: demo not loaded.');
+  }
+  const mailer = createMailer(config.mail.smtpUrl, config.mail.from);
+  const app = createApp({ sequelize, config, mailer, serveWeb: process.env.SERVE_WEB !== '0' });
+  const server: Server = app.listen(config.port, config.host, () => {
+    const url = `http://${config.host === '0.0.0.0' ? 'localhost' : config.host}:${config.port}`;
+    console.log(`\nOvalyard is running at ${url}`);
+    if (process.env.DEMO_SEED === '1') console.log(demoSignInHint());
+    console.log('Press Ctrl-C to stop.\n');
+  });
+  const shutdown = (signal: string) => {
+    console.log(`\n${signal}: stopping the server…`);
+    server.close(() => {
+      void sequelize.close().finally(() => process.exit(0));
+    });
+    setTimeout(() => process.exit(0), 5000).unref();
+  };
+  process.on('SIGINT', () => shutdown('SIGINT'));
+  process.on('SIGTERM', () => shutdown('SIGTERM'));
+}
+
+main().catch((err) => {
+  console.error(err instanceof Error ? err.message : err);
+  process.exit(1);
+});

@@ -1,0 +1,23 @@
+import { Router } from 'express';
+import { actorOf } from '../middleware/authenticate';
+import { idParamsSchema, teamMemberBodySchema, teamMemberUpdateSchema } from '../schemas';
+import { addFitter, listTeam, updateFitter } from '../services/team';
+
+export function teamRouter(): Router {
+  const router = Router();
+
+  router.get('/', async (_req, res) => {
+    res.json(await listTeam(actorOf(res)));
+  });
+
+  router.post('/', async (req, res) => {
+    res.status(201).json(await addFitter(actorOf(res), teamMemberBodySchema.parse(req.body)));
+  });
+
+  router.patch('/:id', async (req, res) => {
+    const { id } = idParamsSchema.parse(req.params);
+    res.json(await updateFitter(actorOf(res), id, teamMemberUpdateSchema.parse(req.body)));
+  });
+
+  return router;
+}

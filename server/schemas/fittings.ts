@@ -1,0 +1,57 @@
+import { z } from 'zod';
+import { optionalText } from './common';
+
+export const venueSchema = z.enum(['indoor', 'outdoor']);
+
+const nullableNumber = (min: number, max: number, message?: string) =>
+  z.number().min(min, message).max(max, message).nullish().transform((v) => v ?? null);
+
+const fittingFields = {
+  /** The fitter running it; defaults to the signed-in fitter. */
+  fitterId: z.uuid().nullish(),
+  date: z.iso.date({ message: 'Enter a date as YYYY-MM-DD.' }),
+  venue: venueSchema,
+  temperatureC: nullableNumber(-20, 50, 'Temperature must be between −20 and 50 °C.'),
+  altitudeM: nullableNumber(-430, 4500, 'Altitude must be between −430 and 4,500 m.'),
+  humidityPct: nullableNumber(0, 100, 'Humidity is a percentage, 0 to 100.'),
+  ball: optionalText(120),
+  notes: optionalText(4000),
+  /** A remote fitting: the player may upload their own bay files. */
+  remote: z.boolean(),
+};
+
+export const fittingBodySchema = z.object({
+  ...fittingFields,
+  playerId: z.uuid({ message: 'Choose a player.' }),
+  venue: venueSchema.default('indoor'),
+  remote: z.boolean().default(false),
+});
+export type FittingBody = z.input<typeof fittingBodySchema>;
+/** A change to a fitting: only the keys sent change (no defaults here, on purpose). */
+export const fittingUpdateSchema = z.object(fittingFields).partial();
+
+export const fittingSchema = z.object({
+  id: z.string(),
+  shopId: z.string(),
+  playerId: z.string(),
+  playerName: z.string(),
+  fitterId: z.string().nullable(),
+  fitterName: z.string().nullable(),
+  date: z.string(),
+  venue: venueSchema,
+  temperatureC: z.number().nullable(),
+  altitudeM: z.number().nullable(),
+  humidityPct: z.number().nullable(),
+  ball: z.string().nullable(),
+  notes: z.string().nullable(),
+  remote: z.boolean(),
+  shotCount: z.number(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+});
+export type Fitting = z.infer<typeof fittingSchema>;
+
+export const fittingListQuerySchema = z.object({
+  playerId: z.uuid().optional(),
+});
+export type FittingFilters = z.infer<typeof fittingListQuerySchema>;

@@ -1,0 +1,6 @@
+// Shared contracts: zod only. Imported by the server (validation) and the app (types, forms).
+export * from './common';
+export * from './auth';
+export * from './players';
+export * from './fittings';
+export * from './team';

@@ -1,0 +1,98 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import type { Sequelize } from 'sequelize';
+import { Fitting, Player, Shop, User } from '../models';
+import { hashPassword } from '../services/passwords';
+
+interface Scenario {
+  password: string;
+  shop: { name: string };
+  owner: { name: string; email: string };
+  fitters: { name: string; email: string }[];
+  players: (Omit<Player['_creationAttributes'], 'shopId' | 'userId'> & { key: string; account: boolean })[];
+  fittings: {
+    player: string;
+    fitter: string;
+    daysAgo: number;
+    venue: 'indoor' | 'outdoor';
+    temperatureC: number;
+    altitudeM: number;
+    humidityPct: number;
+    ball: string;
+    notes: string;
+    remote: boolean;
+  }[];
+}
+
+export const DEMO_DIR = path.resolve(__dirname, '../../fixtures/demo');
+
+export function readScenario(): Scenario {
+  return JSON.parse(fs.readFileSync(path.join(DEMO_DIR, 'scenario.json'), 'utf8')) as Scenario;
+}
+
+export type DemoHook = (ctx: { sequelize: Sequelize; fittings: Map<string, Fitting>; scenario: Scenario }) => Promise<void>;
+
+/**
+ * Loads the invented demo scenario — only into an empty database (no users at all), never over
+ * real data. Returns false when it did nothing.
+ */
+export async function seedDemo(sequelize: Sequelize, now: Date, after?: DemoHook): Promise<boolean> {
+  if ((await User.count()) > 0) return false;
+  const scenario = readScenario();
+  const passwordHash = await hashPassword(scenario.password);
+  const fittings = new Map<string, Fitting>();
+  await sequelize.transaction(async (transaction) => {
+    const shop = await Shop.create({ name: scenario.shop.name }, { transaction });
+    const staff = new Map<string, User>();
+    const owner = await User.create({ shopId: shop.id, role: 'owner', passwordHash, ...scenario.owner }, { transaction });
+    staff.set(owner.email, owner);
+    for (const f of scenario.fitters) {
+      staff.set(f.email, await User.create({ shopId: shop.id, role: 'fitter', passwordHash, ...f }, { transaction }));
+    }
+    const players = new Map<string, Player>();
+    for (const { key, account, ...p } of scenario.players) {
+      let userId: string | null = null;
+      if (account && p.email) {
+        const user = await User.create({ shopId: shop.id, role: 'player', passwordHash, name: p.name, email: p.email }, { transaction });
+        userId = user.id;
+      }
+      players.set(key, await Player.create({ ...p, shopId: shop.id, userId }, { transaction }));
+    }
+    for (const [i, f] of scenario.fittings.entries()) {
+      const date = new Date(now.getTime() - f.daysAgo * 86_400_000).toISOString().slice(0, 10);
+      const fitting = await Fitting.create(
+        {
+          shopId: shop.id,
+          playerId: players.get(f.player)!.id,
+          fitterId: staff.get(f.fitter)!.id,
+          date,
+          venue: f.venue,
+          temperatureC: f.temperatureC,
+          altitudeM: f.altitudeM,
+          humidityPct: f.humidityPct,
+          ball: f.ball,
+          notes: f.notes,
+          remote: f.remote,
+        },
+        { transaction },
+      );
+      fittings.set(String(i), fitting);
+    }
+  });
+  if (after) await after({ sequelize, fittings, scenario });
+  return true;
+}
+
+/** How to sign in to the demo, for the start log and the sign-in screen. */
+export function demoSignInHint(): string {
+  const s = readScenario();
+  const player = s.players.find((p) => p.account);
+  return [
+    `Demo sign-in (password "${s.password}" for all):`,
+    `  owner   ${s.owner.email}`,
+    `  fitter  ${s.fitters[0].email}`,
+    player?.email ? `  player  ${player.email}` : '',
+  ]
+    .filter(Boolean)
+    .join('\n');
+}

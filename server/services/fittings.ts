@@ -1,0 +1,111 @@
+import { Op, type WhereOptions } from 'sequelize';
+import type { z } from 'zod';
+import { HttpError, notFound } from '../errors';
+import { Fitting as FittingModel, Player, User } from '../models';
+import type { Fitting, FittingFilters, fittingBodySchema, fittingUpdateSchema } from '../schemas';
+import { type Actor, isStaff, requireStaff } from './actor';
+import { findVisiblePlayer } from './players';
+
+type ShotCounter = (fittingIds: string[]) => Promise<Map<string, number>>;
+
+let countShots: ShotCounter = async () => new Map();
+/** The bay-file service tells fittings how to count their shots (kept apart to avoid a cycle). */
+export function setShotCounter(counter: ShotCounter): void {
+  countShots = counter;
+}
+
+const include = [
+  { model: Player, as: 'player', attributes: ['id', 'name'] },
+  { model: User, as: 'fitter', attributes: ['id', 'name'] },
+];
+
+export function toFitting(f: FittingModel, shotCount = 0): Fitting {
+  return {
+    id: f.id,
+    shopId: f.shopId,
+    playerId: f.playerId,
+    playerName: f.player?.name ?? '',
+    fitterId: f.fitterId,
+    fitterName: f.fitter?.name ?? null,
+    date: f.date,
+    venue: f.venue,
+    temperatureC: f.temperatureC,
+    altitudeM: f.altitudeM,
+    humidityPct: f.humidityPct,
+    ball: f.ball,
+    notes: f.notes,
+    remote: f.remote,
+    shotCount,
+    createdAt: f.createdAt.toISOString(),
+    updatedAt: f.updatedAt.toISOString(),
+  };
+}
+
+/** Where-clause of the fittings an actor may see: their shop's, or only their own. */
+export function visibleFittings(actor: Actor): WhereOptions<FittingModel> {
+  if (isStaff(actor)) return { shopId: actor.shopId };
+  return { shopId: actor.shopId, playerId: actor.playerId ?? '00000000-0000-0000-0000-000000000000' };
+}
+
+export async function listFittings(actor: Actor, filters: FittingFilters): Promise<Fitting[]> {
+  const where: WhereOptions<FittingModel> = filters.playerId
+    ? { [Op.and]: [visibleFittings(actor), { playerId: filters.playerId }] }
+    : visibleFittings(actor);
+  const fittings = await FittingModel.findAll({ where, include, order: [['date', 'DESC'], ['createdAt', 'DESC']], limit: 500 });
+  const shots = await countShots(fittings.map((f) => f.id));
+  return fittings.map((f) => toFitting(f, shots.get(f.id) ?? 0));
+}
+
+/** A fitting the actor may see, or 404. */
+export async function findVisibleFitting(actor: Actor, id: string): Promise<FittingModel> {
+  const fitting = await FittingModel.findOne({ where: { [Op.and]: [visibleFittings(actor), { id }] }, include });
+  if (!fitting) throw notFound('That fitting');
+  return fitting;
+}
+
+export async function getFitting(actor: Actor, id: string): Promise<Fitting> {
+  const fitting = await findVisibleFitting(actor, id);
+  const shots = await countShots([id]);
+  return toFitting(fitting, shots.get(id) ?? 0);
+}
+
+async function checkFitter(actor: Actor, fitterId: string): Promise<void> {
+  const fitter = await User.findOne({ where: { id: fitterId, shopId: actor.shopId, role: ['owner', 'fitter'], active: true } });
+  if (!fitter) throw new HttpError(400, 'VALIDATION_FAILED', 'The fitter must be an active member of your shop.', [{ path: ['fitterId'], message: 'Unknown fitter' }]);
+}
+
+export async function createFitting(actor: Actor, body: z.output<typeof fittingBodySchema>): Promise<Fitting> {
+  requireStaff(actor);
+  await findVisiblePlayer(actor, body.playerId).catch(() => {
+    throw new HttpError(400, 'VALIDATION_FAILED', 'Choose a player of your shop.', [{ path: ['playerId'], message: 'Unknown player' }]);
+  });
+  const fitterId = body.fitterId ?? actor.id;
+  await checkFitter(actor, fitterId);
+  const fitting = await FittingModel.create({
+    shopId: actor.shopId,
+    playerId: body.playerId,
+    fitterId,
+    date: body.date,
+    venue: body.venue,
+    temperatureC: body.temperatureC,
+    altitudeM: body.altitudeM,
+    humidityPct: body.humidityPct,
+    ball: body.ball,
+    notes: body.notes,
+    remote: body.remote,
+  });
+  return getFitting(actor, fitting.id);
+}
+
+export async function updateFitting(actor: Actor, id: string, body: z.output<typeof fittingUpdateSchema>): Promise<Fitting> {
+  requireStaff(actor);
+  const fitting = await findVisibleFitting(actor, id);
+  if (body.fitterId) await checkFitter(actor, body.fitterId);
+  const { fitterId, date, venue, temperatureC, altitudeM, humidityPct, ball, notes, remote } = body;
+  const changes = { fitterId, date, venue, temperatureC, altitudeM, humidityPct, ball, notes, remote };
+  for (const [key, value] of Object.entries(changes)) {
+    if (value !== undefined) fitting.set(key as keyof typeof changes, value as never);
+  }
+  await fitting.save();
+  return getFitting(actor, id);
+}

@@ -1,0 +1,71 @@
+import type { z } from 'zod';
+import { HttpError, notFound } from '../errors';
+import { User } from '../models';
+import type { TeamMember, playerAccountBodySchema, teamMemberBodySchema, teamMemberUpdateSchema } from '../schemas';
+import { type Actor, requireOwner, requireStaff } from './actor';
+import { hashPassword } from './passwords';
+import { findVisiblePlayer } from './players';
+
+const toMember = (u: User): TeamMember => ({
+  id: u.id,
+  name: u.name,
+  email: u.email,
+  role: u.role === 'owner' ? 'owner' : 'fitter',
+  active: u.active,
+});
+
+export async function listTeam(actor: Actor): Promise<TeamMember[]> {
+  requireStaff(actor);
+  const users = await User.findAll({ where: { shopId: actor.shopId, role: ['owner', 'fitter'] }, order: [['role', 'DESC'], ['name', 'ASC']] });
+  return users.map(toMember);
+}
+
+async function ensureEmailFree(email: string): Promise<void> {
+  if (await User.findOne({ where: { email }, attributes: ['id'] })) {
+    throw new HttpError(409, 'EMAIL_TAKEN', 'An account with that e-mail already exists.');
+  }
+}
+
+export async function addFitter(actor: Actor, body: z.output<typeof teamMemberBodySchema>): Promise<TeamMember> {
+  requireOwner(actor);
+  await ensureEmailFree(body.email);
+  const user = await User.create({
+    shopId: actor.shopId,
+    email: body.email,
+    name: body.name,
+    role: 'fitter',
+    passwordHash: await hashPassword(body.password),
+  });
+  return toMember(user);
+}
+
+export async function updateFitter(actor: Actor, id: string, body: z.output<typeof teamMemberUpdateSchema>): Promise<TeamMember> {
+  requireOwner(actor);
+  const user = await User.findOne({ where: { id, shopId: actor.shopId, role: 'fitter' } });
+  if (!user) throw notFound('That fitter');
+  if (body.name !== undefined) user.name = body.name;
+  if (body.active !== undefined && body.active !== user.active) {
+    user.active = body.active;
+    if (!body.active) user.tokenVersion = user.tokenVersion + 1; // ends their sessions
+  }
+  await user.save();
+  return toMember(user);
+}
+
+/** Gives a player profile its own sign-in (role player). */
+export async function createPlayerAccount(actor: Actor, playerId: string, body: z.output<typeof playerAccountBodySchema>): Promise<void> {
+  requireStaff(actor);
+  const player = await findVisiblePlayer(actor, playerId);
+  if (player.userId) throw new HttpError(409, 'HAS_ACCOUNT', 'This player already has a sign-in.');
+  await ensureEmailFree(body.email);
+  const user = await User.create({
+    shopId: actor.shopId,
+    email: body.email,
+    name: player.name,
+    role: 'player',
+    passwordHash: await hashPassword(body.password),
+  });
+  player.userId = user.id;
+  if (!player.email) player.email = body.email;
+  await player.save();
+}

@@ -1,0 +1,61 @@
+import { buildShopWorld } from '@/fixtures/builders';
+import { createTestContext, type TestContext } from '../../support/test-db';
+import { APP_HEADER, signedInAgent } from '../../support/sign-in';
+
+let ctx: TestContext;
+let world: Awaited<ReturnType<typeof buildShopWorld>>;
+let rival: Awaited<ReturnType<typeof buildShopWorld>>;
+beforeAll(async () => {
+  ctx = await createTestContext();
+  world = await buildShopWorld();
+  rival = await buildShopWorld();
+});
+afterAll(async () => {
+  await ctx.close();
+});
+
+describe('/api/team', () => {
+  it('GET as an owner lists the shop’s owner and fitters, no players', async () => {
+    const agent = await signedInAgent(ctx.app, world.owner.email);
+    const res = await agent.get('/api/team');
+    expect(res.status).toBe(200);
+    expect(res.body.map((m: { id: string }) => m.id).sort()).toEqual([world.owner.id, world.fitter.id].sort());
+  });
+
+  it('GET as a player answers 403', async () => {
+    const agent = await signedInAgent(ctx.app, world.playerUser.email);
+    expect((await agent.get('/api/team')).status).toBe(403);
+  });
+
+  it('POST as an owner adds a fitter who can sign in; a duplicate e-mail answers 409', async () => {
+    const agent = await signedInAgent(ctx.app, world.owner.email);
+    const res = await agent.post('/api/team').set(APP_HEADER).send({ name: 'Cato Brisk', email: 'cato@test.example', password: 'first password' });
+    expect(res.status).toBe(201);
+    expect(res.body).toMatchObject({ name: 'Cato Brisk', role: 'fitter', active: true });
+    await signedInAgent(ctx.app, 'cato@test.example', 'first password');
+    const dup = await agent.post('/api/team').set(APP_HEADER).send({ name: 'Cato Again', email: 'cato@test.example', password: 'first password' });
+    expect(dup.status).toBe(409);
+  });
+
+  it('POST as a fitter answers 403', async () => {
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    expect((await agent.post('/api/team').set(APP_HEADER).send({ name: 'X', email: 'x1@test.example', password: 'first password' })).status).toBe(403);
+  });
+
+  it('POST with a short password answers 400', async () => {
+    const agent = await signedInAgent(ctx.app, world.owner.email);
+    expect((await agent.post('/api/team').set(APP_HEADER).send({ name: 'X', email: 'x2@test.example', password: 'short' })).status).toBe(400);
+  });
+
+  it('PATCH active=false as an owner ends the fitter’s session; another shop’s owner gets 404', async () => {
+    const owner = await signedInAgent(ctx.app, world.owner.email);
+    const created = await owner.post('/api/team').set(APP_HEADER).send({ name: 'Lise Fenn', email: 'lise@test.example', password: 'first password' });
+    const lise = await signedInAgent(ctx.app, 'lise@test.example', 'first password');
+    const rivalOwner = await signedInAgent(ctx.app, rival.owner.email);
+    expect((await rivalOwner.patch(`/api/team/${created.body.id}`).set(APP_HEADER).send({ active: false })).status).toBe(404);
+    const res = await owner.patch(`/api/team/${created.body.id}`).set(APP_HEADER).send({ active: false });
+    expect(res.status).toBe(200);
+    expect(res.body.active).toBe(false);
+    expect((await lise.get('/api/me')).status).toBe(401);
+  });
+});
