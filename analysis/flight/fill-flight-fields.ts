@@ -1,0 +1,51 @@
+import type { ShotField, ShotValues } from '@/analysis/fields';
+import type { AirConditions } from './air-conditions';
+import { launchFromShot } from './launch-from-shot';
+import { simulateFlight, type FlightOptions, type FlightResult } from './simulate-flight';
+
+/** The shot fields the ball-flight model can supply, in the order they are listed when derived. */
+export const FLIGHT_FIELDS = ['carry', 'offline', 'apexHeight', 'descentAngle', 'flightTime'] as const;
+
+export type FlightField = (typeof FLIGHT_FIELDS)[number];
+
+/**
+ * A flight result's value for a shot field, in canonical units (carry → carryM, …). O(1).
+ * @example flightFieldValue(simulateFlight(launch), 'apexHeight') // => its apexHeightM
+ */
+export function flightFieldValue(flight: FlightResult, field: FlightField): number {
+  switch (field) {
+    case 'carry': return flight.carryM;
+    case 'offline': return flight.offlineM;
+    case 'apexHeight': return flight.apexHeightM;
+    case 'descentAngle': return flight.descentAngleDeg;
+    case 'flightTime': return flight.flightTimeS;
+  }
+}
+
+/**
+ * Fill a shot's missing carry, offline, apexHeight, descentAngle and flightTime from the
+ * ball-flight model, in the air the shot was hit in (`air`, default the ISO 2533 sea-level
+ * atmosphere). Values present are left untouched; offline is filled only when the shot has
+ * both its launch direction and its spin axis (spinAxis, or backSpin with sideSpin), since
+ * without them the model's offline would be a guess. Returns the input unchanged (same
+ * object, no derived fields) when ball speed, launch angle or spin is missing, or nothing is
+ * missing. O(one trajectory).
+ * @throws RangeError when a launch or air value is out of range (e.g. humidity 120 %)
+ * @example fillFlightFields({ ballSpeed: 74.65, launchAngle: 10.9, spinRate: 2686 })
+ *   // => { values: { …, carry: 236.3, apexHeight: 28.0, descentAngle: 37.0, flightTime: 6.61 },
+ *   //      derived: ['carry', 'apexHeight', 'descentAngle', 'flightTime'] }
+ */
+export function fillFlightFields(
+  values: ShotValues,
+  air?: AirConditions,
+  options?: FlightOptions,
+): { values: ShotValues; derived: ShotField[] } {
+  const shot = launchFromShot(values);
+  if (!shot) return { values, derived: [] };
+  const missing = FLIGHT_FIELDS.filter((field) => values[field] === undefined && (field !== 'offline' || shot.sideKnown));
+  if (missing.length === 0) return { values, derived: [] };
+  const flight = simulateFlight(shot.launch, air, options);
+  const filled: ShotValues = { ...values };
+  for (const field of missing) filled[field] = flightFieldValue(flight, field);
+  return { values: filled, derived: missing };
+}

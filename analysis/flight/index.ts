@@ -1,0 +1,48 @@
+export { resolveAir, type AirConditions, type ResolvedAir, type Wind } from './air-conditions';
+export { sutherlandViscosityPaS } from './air-viscosity';
+export { ballForces, type UnitVector } from './ball-forces';
+export type { CoefficientModel } from './coefficient-model';
+export {
+  BALL_AREA_M2,
+  BALL_DIAMETER_M,
+  BALL_MASS_KG,
+  BALL_RADIUS_M,
+  RAD_PER_DEG,
+  RAD_PER_S_PER_RPM,
+  STANDARD_GRAVITY_MPS2,
+} from './constants';
+export { defaultCoefficients } from './default-coefficients';
+export { FLIGHT_FIELDS, fillFlightFields, flightFieldValue, type FlightField } from './fill-flight-fields';
+export type { ForceModel } from './force-model';
+export {
+  integrateTrajectory,
+  type IntegrationOptions,
+  type PathPoint,
+  type TrajectoryResult,
+  type TrajectoryStart,
+} from './integrate-trajectory';
+export { launchFromShot, type ShotLaunch } from './launch-from-shot';
+export { launchVectors, type Launch, type LaunchVectors } from './launch-vectors';
+export { LYU_DRAG_BRANCH_SWITCH_RE, lyuCoefficients, lyuDragCoefficient, lyuLiftCoefficient } from './lyu-coefficients';
+export { DEFAULT_CO2_MOLE_FRACTION, moistAirDensityKgM3, saturationVapourPressurePa } from './moist-air-density';
+export { normaliseShot, type NormalisedShot } from './normalise-shot';
+export {
+  optimiseLaunch,
+  type LaunchOptimum,
+  type LaunchWindow,
+  type OptimiseOptions,
+  type WindowRow,
+} from './optimise-launch';
+export { reynoldsNumber } from './reynolds-number';
+export { simulateFlight, type FlightOptions, type FlightResult } from './simulate-flight';
+export { smitsSmithCoefficients, smitsSmithDragCoefficient, smitsSmithLiftCoefficient } from './smits-smith-coefficients';
+export { SPIN_DECAY_COEFFICIENT, spinDecayTimeConstantS } from './spin-decay';
+export {
+  ISA_GAS_CONSTANT_J_PER_KG_K,
+  ISA_LAPSE_RATE_K_PER_M,
+  ISA_SEA_LEVEL_PRESSURE_PA,
+  ISA_SEA_LEVEL_TEMPERATURE_K,
+  isaDensityKgM3,
+  isaPressurePa,
+  isaTemperatureK,
+} from './standard-atmosphere';

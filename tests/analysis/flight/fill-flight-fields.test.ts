@@ -1,0 +1,44 @@
+import { fillFlightFields, simulateFlight } from '@/analysis/flight';
+
+const launch = { ballSpeed: 74.65, launchAngle: 10.9, spinRate: 2686 };
+
+describe('fillFlightFields', () => {
+  it('fillFlightFields with launch only fills carry, apex, descent and flight time from the model', () => {
+    const { values, derived } = fillFlightFields(launch);
+    const flight = simulateFlight({ ballSpeedMps: 74.65, launchAngleDeg: 10.9, spinRateRpm: 2686 });
+    expect(derived).toEqual(['carry', 'apexHeight', 'descentAngle', 'flightTime']);
+    expect(values.carry).toBe(flight.carryM);
+    expect(values.apexHeight).toBe(flight.apexHeightM);
+    expect(values.descentAngle).toBe(flight.descentAngleDeg);
+    expect(values.flightTime).toBe(flight.flightTimeS);
+    expect(values.offline).toBeUndefined();
+  });
+  it('fillFlightFields with direction and spin axis also fills offline', () => {
+    const { values, derived } = fillFlightFields({ ...launch, launchDirection: -2, spinAxis: 6 });
+    expect(derived).toContain('offline');
+    expect(values.offline).toBe(
+      simulateFlight({ ballSpeedMps: 74.65, launchAngleDeg: 10.9, spinRateRpm: 2686, launchDirectionDeg: -2, spinAxisDeg: 6 }).offlineM,
+    );
+  });
+  it('fillFlightFields leaves present values untouched and derives only the missing ones', () => {
+    const input = { ...launch, carry: 250, flightTime: 6.9 };
+    const { values, derived } = fillFlightFields(input);
+    expect(values.carry).toBe(250);
+    expect(values.flightTime).toBe(6.9);
+    expect(derived).toEqual(['apexHeight', 'descentAngle']);
+    expect(input).toEqual({ ...launch, carry: 250, flightTime: 6.9 });
+  });
+  it('fillFlightFields in thinner air fills a longer carry', () => {
+    expect(fillFlightFields(launch, { altitudeM: 1800 }).values.carry!).toBeGreaterThan(fillFlightFields(launch).values.carry!);
+  });
+  it('fillFlightFields without launch inputs returns the input unchanged', () => {
+    const input = { ballSpeed: 70, carry: 200 };
+    const result = fillFlightFields(input);
+    expect(result.values).toBe(input);
+    expect(result.derived).toEqual([]);
+  });
+  it('fillFlightFields with every flight field present returns the input unchanged', () => {
+    const input = { ...launch, carry: 1, offline: 0, apexHeight: 1, descentAngle: 1, flightTime: 1 };
+    expect(fillFlightFields(input).values).toBe(input);
+  });
+});

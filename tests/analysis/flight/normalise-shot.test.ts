@@ -1,0 +1,51 @@
+import { normaliseShot, simulateFlight } from '@/analysis/flight';
+
+const launch = { ballSpeed: 74.65, launchAngle: 10.9, spinRate: 2686, launchDirection: 1, spinAxis: 3 };
+const modelLaunch = { ballSpeedMps: 74.65, launchAngleDeg: 10.9, spinRateRpm: 2686, launchDirectionDeg: 1, spinAxisDeg: 3 };
+const bay = { temperatureC: 20, altitudeM: 0, humidityPct: 40 };
+const course = { temperatureC: 28, altitudeM: 1500, humidityPct: 30 };
+
+describe('normaliseShot', () => {
+  it('normaliseShot scales measured carry, apex and flight time by the model ratio', () => {
+    const measured = { ...launch, carry: 230, apexHeight: 27, flightTime: 6.4 };
+    const { values, normalised } = normaliseShot(measured, bay, course);
+    const before = simulateFlight(modelLaunch, bay);
+    const after = simulateFlight(modelLaunch, course);
+    expect(values.carry).toBeCloseTo(230 * (after.carryM / before.carryM), 10);
+    expect(values.apexHeight).toBeCloseTo(27 * (after.apexHeightM / before.apexHeightM), 10);
+    expect(values.flightTime).toBeCloseTo(6.4 * (after.flightTimeS / before.flightTimeS), 10);
+    expect(values.carry!).toBeGreaterThan(230);
+    expect(normalised).toEqual(['carry', 'apexHeight', 'flightTime']);
+  });
+  it('normaliseShot shifts offline and descent angle by the model difference', () => {
+    const { values } = normaliseShot({ ...launch, offline: 4, descentAngle: 38 }, bay, course);
+    const before = simulateFlight(modelLaunch, bay);
+    const after = simulateFlight(modelLaunch, course);
+    expect(values.offline).toBeCloseTo(4 + after.offlineM - before.offlineM, 10);
+    expect(values.descentAngle).toBeCloseTo(38 + after.descentAngleDeg - before.descentAngleDeg, 10);
+  });
+  it('normaliseShot shifts total by the change of carry', () => {
+    const { values, normalised } = normaliseShot({ ...launch, carry: 230, total: 255 }, bay, course);
+    expect(values.total! - 255).toBeCloseTo(values.carry! - 230, 10);
+    expect(normalised).toContain('total');
+  });
+  it('normaliseShot fills missing flight fields from the model in the target conditions', () => {
+    const { values, derived } = normaliseShot({ ...launch, carry: 230 }, bay, course);
+    expect(derived).toEqual(['offline', 'apexHeight', 'descentAngle', 'flightTime']);
+    expect(values.apexHeight).toBe(simulateFlight(modelLaunch, course).apexHeightM);
+  });
+  it('normaliseShot to the same conditions changes nothing', () => {
+    const measured = { ...launch, carry: 230, offline: 4, apexHeight: 27, descentAngle: 38, flightTime: 6.4 };
+    const { values } = normaliseShot(measured, bay, bay);
+    for (const field of ['carry', 'offline', 'apexHeight', 'descentAngle', 'flightTime'] as const) {
+      expect(values[field]).toBeCloseTo(measured[field], 12);
+    }
+  });
+  it('normaliseShot without launch inputs returns the input unchanged', () => {
+    const input = { carry: 200 };
+    const result = normaliseShot(input, bay, course);
+    expect(result.values).toBe(input);
+    expect(result.derived).toEqual([]);
+    expect(result.normalised).toEqual([]);
+  });
+});
