@@ -7,10 +7,14 @@ import type { Config } from './config';
 import { authenticate } from './middleware/authenticate';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { authRouter } from './routes/auth';
+import { bayFilesRouter } from './routes/bay-files';
 import { fittingsRouter } from './routes/fittings';
 import { healthRouter } from './routes/health';
 import { playersRouter } from './routes/players';
+import { recipesRouter } from './routes/recipes';
+import { shotsRouter } from './routes/shots';
 import { teamRouter } from './routes/team';
+import type { CommitHooks } from './services/bay-files';
 import type { Mailer } from './services/mailer';
 
 export interface AppDeps {
@@ -20,10 +24,12 @@ export interface AppDeps {
   /** Serve the exported web app from config.webDist (production start). */
   serveWeb?: boolean;
   log?: (message: string, error: unknown) => void;
+  /** Test hooks into the bay-file commit (failure injection). */
+  commitHooks?: CommitHooks;
 }
 
 /** Builds the Express app; listening is the caller's business (server/index.ts, tests). */
-export function createApp({ sequelize, config, serveWeb = false, log }: AppDeps): Express {
+export function createApp({ sequelize, config, serveWeb = false, log, commitHooks }: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   if (config.trustProxy) app.set('trust proxy', 1);
@@ -37,9 +43,14 @@ export function createApp({ sequelize, config, serveWeb = false, log }: AppDeps)
   });
   api.use('/health', healthRouter(sequelize));
   api.use(authRouter(config));
-  api.use('/players', authenticate(config), playersRouter());
-  api.use('/fittings', authenticate(config), fittingsRouter());
-  api.use('/team', authenticate(config), teamRouter());
+  // Everything below needs a signed-in user; each service checks role and shop again.
+  api.use(['/players', '/fittings', '/team', '/recipes', '/bay-files', '/shots', '/builds'], authenticate(config));
+  api.use('/players', playersRouter());
+  api.use('/fittings', fittingsRouter());
+  api.use('/team', teamRouter());
+  api.use('/recipes', recipesRouter());
+  api.use(bayFilesRouter(sequelize, config, commitHooks));
+  api.use(shotsRouter(sequelize));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -29,7 +29,8 @@ async function main(): Promise<void> {
     server.close(() => {
       void sequelize.close().finally(() => process.exit(0));
     });
-    setTimeout(() => process.exit(0), 5000).unref();
+    const force = setTimeout(() => process.exit(0), 5000) as unknown as { unref?: () => void };
+    force.unref?.();
   };
   process.on('SIGINT', () => shutdown('SIGINT'));
   process.on('SIGTERM', () => shutdown('SIGTERM'));

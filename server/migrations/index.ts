@@ -1,9 +1,11 @@
 import type { QueryInterface } from 'sequelize';
 import * as m0001 from './0001-foundation';
+import * as m0002 from './0002-bay-files';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
 /** Every migration in order. Add new ones at the end; never edit one that has shipped. */
 export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '0001-foundation', ...m0001 },
+  { name: '0002-bay-files', ...m0002 },
 ];

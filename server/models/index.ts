@@ -1,10 +1,13 @@
 import type { Sequelize } from 'sequelize';
+import { BayFile } from './bay-file';
+import { Build } from './build';
 import { Fitting } from './fitting';
 import { Player } from './player';
+import { Recipe } from './recipe';
 import { Shop } from './shop';
 import { User } from './user';
 
-export { Fitting, Player, Shop, User };
+export { BayFile, Build, Fitting, Player, Recipe, Shop, User };
 
 /** Registers every model and association on one Sequelize instance. */
 export function initModels(sequelize: Sequelize): void {
@@ -12,6 +15,9 @@ export function initModels(sequelize: Sequelize): void {
   User.initModel(sequelize);
   Player.initModel(sequelize);
   Fitting.initModel(sequelize);
+  BayFile.initModel(sequelize);
+  Recipe.initModel(sequelize);
+  Build.initModel(sequelize);
 
   Shop.hasMany(User, { foreignKey: 'shopId' });
   User.belongsTo(Shop, { foreignKey: 'shopId', as: 'shop' });
@@ -22,4 +28,12 @@ export function initModels(sequelize: Sequelize): void {
   Fitting.belongsTo(Player, { foreignKey: 'playerId', as: 'player' });
   Fitting.belongsTo(User, { foreignKey: 'fitterId', as: 'fitter' });
   Fitting.belongsTo(Shop, { foreignKey: 'shopId' });
+  Fitting.hasMany(BayFile, { foreignKey: 'fittingId', as: 'bayFiles' });
+  BayFile.belongsTo(Fitting, { foreignKey: 'fittingId', as: 'fitting' });
+  BayFile.belongsTo(User, { foreignKey: 'uploadedBy', as: 'uploader' });
+  Fitting.hasMany(Build, { foreignKey: 'fittingId', as: 'builds' });
+  Build.belongsTo(Fitting, { foreignKey: 'fittingId' });
+  Shop.hasMany(Recipe, { foreignKey: 'shopId' });
+  Recipe.belongsTo(Shop, { foreignKey: 'shopId' });
+  Recipe.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
 }

@@ -4,3 +4,5 @@ export * from './auth';
 export * from './players';
 export * from './fittings';
 export * from './team';
+export * from './bay-files';
+export * from './analysis';

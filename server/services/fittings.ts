@@ -5,14 +5,9 @@ import { Fitting as FittingModel, Player, User } from '../models';
 import type { Fitting, FittingFilters, fittingBodySchema, fittingUpdateSchema } from '../schemas';
 import { type Actor, isStaff, requireStaff } from './actor';
 import { findVisiblePlayer } from './players';
+import { countShotsByFitting } from './shot-store';
 
-type ShotCounter = (fittingIds: string[]) => Promise<Map<string, number>>;
-
-let countShots: ShotCounter = async () => new Map();
-/** The bay-file service tells fittings how to count their shots (kept apart to avoid a cycle). */
-export function setShotCounter(counter: ShotCounter): void {
-  countShots = counter;
-}
+const countShots = (ids: string[]) => countShotsByFitting(FittingModel.sequelize!, ids);
 
 const include = [
   { model: Player, as: 'player', attributes: ['id', 'name'] },

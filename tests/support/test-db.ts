@@ -59,6 +59,6 @@ export async function createTestContext(env: Record<string, string> = {}): Promi
     DB_PASSWORD: db.password,
     ...env,
   });
-  const app = createApp({ sequelize, config, log: () => {} });
+  const app = createApp({ sequelize, config, log: process.env.TEST_LOG ? (m, e) => console.error(m, e) : () => {} });
   return { sequelize, config, app, close: drop };
 }

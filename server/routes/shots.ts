@@ -1,0 +1,35 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import type { Sequelize } from 'sequelize';
+import { actorOf } from '../middleware/authenticate';
+import { analysisQuerySchema, buildSpecBodySchema, idParamsSchema, shotDecisionBodySchema } from '../schemas';
+import { analyseFitting } from '../services/analysis';
+import { listBuilds, updateBuild } from '../services/bay-files';
+import { listShots, setShotDecision } from '../services/shots';
+
+export function shotsRouter(sequelize: Sequelize): Router {
+  const router = Router();
+  router.get('/fittings/:id/shots', async (req, res) => {
+    const { id } = idParamsSchema.parse(req.params);
+    res.json(await listShots(sequelize, actorOf(res), id));
+  });
+  router.get('/fittings/:id/analysis', async (req, res) => {
+    const { id } = idParamsSchema.parse(req.params);
+    const q = analysisQuerySchema.parse(req.query);
+    res.json(await analyseFitting(sequelize, actorOf(res), id, { level: q.level, includeStrays: q.all, compare: q.a && q.b ? [q.a, q.b] : undefined }));
+  });
+  router.patch('/shots/:shotId', async (req, res) => {
+    const { shotId } = z.object({ shotId: z.coerce.number().int().positive() }).parse(req.params);
+    const { decision } = shotDecisionBodySchema.parse(req.body);
+    res.json(await setShotDecision(sequelize, actorOf(res), shotId, decision));
+  });
+  router.get('/fittings/:id/builds', async (req, res) => {
+    const { id } = idParamsSchema.parse(req.params);
+    res.json(await listBuilds(actorOf(res), id));
+  });
+  router.patch('/builds/:id', async (req, res) => {
+    const { id } = idParamsSchema.parse(req.params);
+    res.json(await updateBuild(actorOf(res), id, buildSpecBodySchema.parse(req.body)));
+  });
+  return router;
+}

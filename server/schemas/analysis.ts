@@ -1,0 +1,21 @@
+import { z } from 'zod';
+
+/** "7I|Steel 105" → { club, build }; "7I|" or "7I" → build null. */
+const groupRef = z
+  .string()
+  .max(130)
+  .transform((s) => {
+    const i = s.indexOf('|');
+    const club = i === -1 ? s : s.slice(0, i);
+    const build = i === -1 ? '' : s.slice(i + 1);
+    return { club, build: build === '' ? null : build };
+  });
+
+export const analysisQuerySchema = z
+  .object({
+    level: z.coerce.number().gt(0).lt(1).default(0.95),
+    all: z.enum(['0', '1', 'true', 'false']).default('0').transform((v) => v === '1' || v === 'true'),
+    a: groupRef.optional(),
+    b: groupRef.optional(),
+  })
+  .refine((q) => (q.a === undefined) === (q.b === undefined), { message: 'Give both builds to compare (a and b).', path: ['b'] });

@@ -1,0 +1,71 @@
+/**
+ * A fitting's analysis on the server: its stored shots through the same analysis/ code the
+ * command line and the app use. Shots are numbered by their database id here (a fitting may
+ * hold several bay files whose row numbers overlap), so strays and decisions name shot ids.
+ */
+import type { Sequelize } from 'sequelize';
+import type { Shot } from '../../analysis/fields';
+import { analyseSession, type GroupRef, type SessionAnalysis } from '../../analysis/session';
+import { HttpError } from '../errors';
+import { Build } from '../models';
+import type { Actor } from './actor';
+import { findVisibleFitting } from './fittings';
+import { loadFittingShots } from './shot-store';
+
+export interface AnalysisQuery {
+  level: number;
+  includeStrays: boolean;
+  compare?: [GroupRef, GroupRef];
+}
+
+export interface PlotShot {
+  id: number;
+  bayFileId: string;
+  row: number;
+  club: string;
+  build: string | null;
+  carry: number | null;
+  offline: number | null;
+  decision: 'keep' | 'drop' | null;
+  stray: boolean;
+}
+
+export interface FittingAnalysis {
+  analysis: SessionAnalysis;
+  shots: PlotShot[];
+}
+
+export async function analyseFitting(sequelize: Sequelize, actor: Actor, fittingId: string, query: AnalysisQuery): Promise<FittingAnalysis> {
+  await findVisibleFitting(actor, fittingId);
+  const stored = await loadFittingShots(sequelize, fittingId);
+  const builds = await Build.findAll({ where: { fittingId }, attributes: ['club', 'label', 'loftDeg'] });
+  const loftByGroup: Record<string, number> = {};
+  for (const b of builds) if (b.loftDeg != null) loftByGroup[`${b.club}|${b.label}`] = b.loftDeg;
+  const decisions: Record<number, 'keep' | 'drop'> = {};
+  const shots: Shot[] = stored.map((s) => {
+    if (s.decision) decisions[s.id] = s.decision;
+    return { row: s.id, club: s.club, build: s.build, values: s.values, derived: s.derived };
+  });
+  let analysis: SessionAnalysis;
+  try {
+    analysis = analyseSession(shots, { level: query.level, includeStrays: query.includeStrays, decisions, compare: query.compare, loftByGroup });
+  } catch (err) {
+    if (err instanceof RangeError) throw new HttpError(400, 'BAD_ANALYSIS_REQUEST', err.message.replace(/^analyseSession: /, ''));
+    throw err;
+  }
+  const strayIds = new Set(analysis.groups.flatMap((g) => g.strays.map((s) => s.row)));
+  return {
+    analysis,
+    shots: stored.map((s) => ({
+      id: s.id,
+      bayFileId: s.bayFileId,
+      row: s.row,
+      club: s.club,
+      build: s.build,
+      carry: s.values.carry ?? null,
+      offline: s.values.offline ?? null,
+      decision: s.decision,
+      stray: strayIds.has(s.id),
+    })),
+  };
+}

@@ -1,0 +1,308 @@
+/**
+ * Bay files: preview (mapping suggestion and converted rows, nothing stored), commit (raw text,
+ * recipe, report and shots in one transaction), re-map, delete; saved recipes; builds.
+ */
+import { createHash } from 'node:crypto';
+import type { Sequelize, Transaction } from 'sequelize';
+import type { Shot } from '../../analysis/fields';
+import { ImportError, importBayFile, recipeSchema, type ImportResult, type Recipe } from '../../analysis/import';
+import { HttpError, notFound } from '../errors';
+import { BayFile, Build, Fitting, Recipe as RecipeModel } from '../models';
+import type { BayFile as BayFileDto, BuildAssignment, ImportReport, SavedRecipe, buildSpecBodySchema, importOptionsSchema } from '../schemas';
+import type { z } from 'zod';
+import { type Actor, isStaff, requireStaff } from './actor';
+import { findVisibleFitting } from './fittings';
+import { decisionsOf, insertShots } from './shot-store';
+
+export type ParsedImportOptions = z.output<typeof importOptionsSchema>;
+
+export interface UploadedFile {
+  name: string;
+  buffer: Buffer;
+}
+
+export interface BayFileLimits {
+  maxRows: number;
+}
+
+/** A fitting the actor may add bay files to: staff of its shop, or its player when it is remote. */
+export async function findWritableFitting(actor: Actor, fittingId: string): Promise<Fitting> {
+  const fitting = await findVisibleFitting(actor, fittingId);
+  if (!isStaff(actor) && !(fitting.remote && fitting.playerId === actor.playerId)) {
+    throw new HttpError(403, 'FORBIDDEN', 'Only a remote fitting takes files from its player. Ask your fitter to make it remote.');
+  }
+  return fitting;
+}
+
+/**
+ * Decodes an upload as text: UTF-8 (BOM dropped), or Windows-1252 when it is not valid UTF-8.
+ * A file with NUL bytes is not text.
+ */
+export function decodeUpload(buffer: Buffer): string {
+  if (buffer.includes(0)) throw new HttpError(400, 'NOT_TEXT', 'This file is not a text (CSV) file. Export the session as CSV and try again.');
+  let text: string;
+  try {
+    text = new TextDecoder('utf-8', { fatal: true }).decode(buffer);
+  } catch {
+    text = new TextDecoder('windows-1252').decode(buffer);
+  }
+  return text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
+}
+
+function countLines(text: string): number {
+  let n = 1;
+  for (let i = text.indexOf('\n'); i !== -1; i = text.indexOf('\n', i + 1)) n += 1;
+  return n;
+}
+
+async function recipeOf(actor: Actor, options: ParsedImportOptions): Promise<Recipe | undefined> {
+  if (!options.recipeId) return options.recipe;
+  const saved = await RecipeModel.findOne({ where: { id: options.recipeId, shopId: actor.shopId } });
+  if (!saved) throw notFound('That recipe');
+  const base = recipeSchema.parse(JSON.parse(saved.recipe));
+  if (!options.recipe) return base;
+  return { ...base, ...options.recipe, columns: { ...base.columns, ...options.recipe.columns } };
+}
+
+function buildOptions(builds: BuildAssignment): { defaultBuild: string | null; buildByClub?: Record<string, string>; forceBuild?: string } {
+  if (builds.mode === 'file') return { defaultBuild: null, forceBuild: builds.build };
+  if (builds.mode === 'club') return { defaultBuild: null, buildByClub: builds.byClub };
+  return { defaultBuild: builds.fallback ?? null };
+}
+
+/** Runs the import library, mapping its errors to 400s a fitter can read. */
+export function runImport(text: string, recipe: Recipe | undefined, builds: BuildAssignment, limits: BayFileLimits): ImportResult {
+  if (countLines(text) > limits.maxRows + 50) {
+    throw new HttpError(400, 'TOO_MANY_ROWS', `This file has more than ${limits.maxRows.toLocaleString('en')} rows, the most one import takes. Split it and import the parts.`);
+  }
+  const b = buildOptions(builds);
+  try {
+    const result = importBayFile(text, { recipe, defaultBuild: b.defaultBuild, buildByClub: b.buildByClub });
+    if (b.forceBuild) for (const s of result.shots) s.build = b.forceBuild;
+    if (result.rows > limits.maxRows) {
+      throw new HttpError(400, 'TOO_MANY_ROWS', `This file has ${result.rows.toLocaleString('en')} rows; one import takes at most ${limits.maxRows.toLocaleString('en')}.`);
+    }
+    return result;
+  } catch (err) {
+    if (err instanceof ImportError) throw new HttpError(400, err.code, err.message);
+    throw err;
+  }
+}
+
+function groupsOf(shots: readonly Shot[]): ImportReport['groups'] {
+  const counts = new Map<string, { club: string; build: string | null; n: number }>();
+  for (const s of shots) {
+    const key = `${s.club}\u0000${s.build ?? ''}`;
+    const g = counts.get(key) ?? { club: s.club, build: s.build, n: 0 };
+    g.n += 1;
+    counts.set(key, g);
+  }
+  return [...counts.values()];
+}
+
+function reportOf(result: ImportResult): ImportReport {
+  return {
+    rows: result.rows,
+    imported: result.shots.length,
+    rejected: result.rejected.slice(0, 1000),
+    skipped: result.skipped.slice(0, 1000),
+    warnings: result.warnings,
+    unknownClubs: result.unknownClubs,
+    groups: groupsOf(result.shots),
+  };
+}
+
+export const contentHash = (text: string) => createHash('sha256').update(text).digest('hex');
+
+/** What an import would do: the mapping, warnings, the first converted rows, the rejected rows. Stores nothing. */
+export async function previewBayFile(actor: Actor, fittingId: string, file: UploadedFile, options: ParsedImportOptions, limits: BayFileLimits) {
+  await findWritableFitting(actor, fittingId);
+  const text = decodeUpload(file.buffer);
+  const result = runImport(text, await recipeOf(actor, options), options.builds, limits);
+  const hash = contentHash(text);
+  const duplicate = await BayFile.findOne({ where: { fittingId, contentHash: hash }, attributes: ['id', 'fileName'] });
+  return {
+    fileName: file.name,
+    contentHash: hash,
+    duplicateOf: duplicate ? { id: duplicate.id, fileName: duplicate.fileName } : null,
+    sniff: result.sniff,
+    recipe: result.recipe,
+    suggestions: result.suggestions,
+    report: reportOf(result),
+    shots: result.shots.slice(0, 25),
+  };
+}
+
+function toDto(b: BayFile): BayFileDto {
+  return {
+    id: b.id,
+    fittingId: b.fittingId,
+    fileName: b.fileName,
+    contentHash: b.contentHash,
+    rowCount: b.rowCount,
+    shotCount: b.shotCount,
+    uploadedBy: b.uploadedBy,
+    createdAt: b.createdAt.toISOString(),
+    updatedAt: b.updatedAt.toISOString(),
+    recipe: JSON.parse(b.recipe) as Recipe,
+    report: JSON.parse(b.report) as ImportReport,
+  };
+}
+
+/** Creates a build record for every (club, label) the shots name that the fitting lacks. */
+async function ensureBuilds(fittingId: string, shots: readonly Shot[], transaction: Transaction): Promise<void> {
+  const wanted = new Map<string, { club: string; label: string }>();
+  for (const s of shots) if (s.build) wanted.set(`${s.club}\u0000${s.build}`, { club: s.club, label: s.build.slice(0, 80) });
+  if (wanted.size === 0) return;
+  const existing = await Build.findAll({ where: { fittingId }, attributes: ['club', 'label'], transaction });
+  for (const e of existing) wanted.delete(`${e.club}\u0000${e.label}`);
+  if (wanted.size) await Build.bulkCreate([...wanted.values()].map((w) => ({ fittingId, ...w })), { transaction });
+}
+
+export interface CommitHooks {
+  /** Called after each stored chunk of shots; tests inject a failure here. */
+  afterChunk?: (chunkIndex: number) => void | Promise<void>;
+}
+
+/** Stores a bay file, its recipe, its report and its shots: all or nothing. */
+export async function commitBayFile(
+  sequelize: Sequelize,
+  actor: Actor,
+  fittingId: string,
+  file: UploadedFile,
+  options: ParsedImportOptions,
+  limits: BayFileLimits,
+  hooks: CommitHooks = {},
+): Promise<BayFileDto> {
+  await findWritableFitting(actor, fittingId);
+  const text = decodeUpload(file.buffer);
+  const result = runImport(text, await recipeOf(actor, options), options.builds, limits);
+  if (result.shots.length === 0) {
+    throw new HttpError(400, 'NO_SHOTS', 'No row of this file could be imported; nothing was stored. See the rejected rows in the preview.');
+  }
+  const hash = contentHash(text);
+  if (await BayFile.findOne({ where: { fittingId, contentHash: hash }, attributes: ['id'] })) {
+    throw new HttpError(409, 'DUPLICATE_FILE', 'This exact file is already imported into this fitting.');
+  }
+  const bayFile = await sequelize.transaction(async (transaction) => {
+    const created = await BayFile.create(
+      {
+        fittingId,
+        uploadedBy: actor.id,
+        fileName: file.name.slice(0, 255) || 'bay-file.csv',
+        contentHash: hash,
+        rawText: text,
+        recipe: JSON.stringify(result.recipe),
+        report: JSON.stringify(reportOf(result)),
+        rowCount: result.rows,
+        shotCount: result.shots.length,
+      },
+      { transaction },
+    );
+    await insertShots(transaction, created.id, fittingId, result.shots, new Map(), hooks.afterChunk);
+    await ensureBuilds(fittingId, result.shots, transaction);
+    if (options.saveRecipeAs && isStaff(actor)) {
+      await RecipeModel.upsert({ shopId: actor.shopId, name: options.saveRecipeAs, recipe: JSON.stringify(result.recipe), createdBy: actor.id }, { transaction });
+    }
+    return created;
+  });
+  return toDto(bayFile);
+}
+
+async function findVisibleBayFile(actor: Actor, id: string): Promise<BayFile> {
+  const bayFile = await BayFile.findByPk(id);
+  if (!bayFile) throw notFound('That bay file');
+  await findVisibleFitting(actor, bayFile.fittingId).catch(() => {
+    throw notFound('That bay file');
+  });
+  return bayFile;
+}
+
+export async function listBayFiles(actor: Actor, fittingId: string): Promise<BayFileDto[]> {
+  await findVisibleFitting(actor, fittingId);
+  const files = await BayFile.findAll({ where: { fittingId }, order: [['createdAt', 'ASC']], attributes: { exclude: ['rawText'] } });
+  return files.map(toDto);
+}
+
+export async function getBayFile(actor: Actor, id: string): Promise<BayFileDto> {
+  return toDto(await findVisibleBayFile(actor, id));
+}
+
+/** The raw text as uploaded. */
+export async function getBayFileText(actor: Actor, id: string): Promise<{ fileName: string; text: string }> {
+  const b = await findVisibleBayFile(actor, id);
+  return { fileName: b.fileName, text: b.rawText };
+}
+
+/** Applies a new recipe to a stored file: its shots are replaced in one transaction; decisions by row stay. */
+export async function remapBayFile(sequelize: Sequelize, actor: Actor, id: string, recipe: Recipe, builds: BuildAssignment, limits: BayFileLimits): Promise<BayFileDto> {
+  const bayFile = await findVisibleBayFile(actor, id);
+  await findWritableFitting(actor, bayFile.fittingId);
+  const result = runImport(bayFile.rawText, recipe, builds, limits);
+  if (result.shots.length === 0) throw new HttpError(400, 'NO_SHOTS', 'With this recipe no row could be imported; the file was left as it was.');
+  await sequelize.transaction(async (transaction) => {
+    const decisions = await decisionsOf(sequelize, bayFile.id, transaction);
+    await sequelize.query('DELETE FROM shots WHERE bay_file_id = ?', { replacements: [bayFile.id], transaction });
+    await insertShots(transaction, bayFile.id, bayFile.fittingId, result.shots, decisions);
+    await ensureBuilds(bayFile.fittingId, result.shots, transaction);
+    await bayFile.update(
+      { recipe: JSON.stringify(result.recipe), report: JSON.stringify(reportOf(result)), rowCount: result.rows, shotCount: result.shots.length },
+      { transaction },
+    );
+  });
+  return getBayFile(actor, id);
+}
+
+export async function deleteBayFile(actor: Actor, id: string): Promise<void> {
+  requireStaff(actor);
+  const bayFile = await findVisibleBayFile(actor, id);
+  await bayFile.destroy(); // shots go with it (ON DELETE CASCADE)
+}
+
+// ---- saved recipes of a shop -------------------------------------------------------------
+
+const toSaved = (r: RecipeModel): SavedRecipe => ({ id: r.id, name: r.name, recipe: JSON.parse(r.recipe) as Recipe, createdAt: r.createdAt.toISOString() });
+
+export async function listRecipes(actor: Actor): Promise<SavedRecipe[]> {
+  requireStaff(actor);
+  return (await RecipeModel.findAll({ where: { shopId: actor.shopId }, order: [['name', 'ASC']] })).map(toSaved);
+}
+
+export async function saveRecipe(actor: Actor, name: string, recipe: Recipe): Promise<SavedRecipe> {
+  requireStaff(actor);
+  if (await RecipeModel.findOne({ where: { shopId: actor.shopId, name } })) {
+    throw new HttpError(409, 'RECIPE_NAME_TAKEN', 'Your shop already has a recipe with that name.');
+  }
+  return toSaved(await RecipeModel.create({ shopId: actor.shopId, name, recipe: JSON.stringify(recipe), createdBy: actor.id }));
+}
+
+export async function deleteRecipe(actor: Actor, id: string): Promise<void> {
+  requireStaff(actor);
+  const n = await RecipeModel.destroy({ where: { id, shopId: actor.shopId } });
+  if (!n) throw notFound('That recipe');
+}
+
+// ---- builds --------------------------------------------------------------------------------
+
+const toBuild = (b: Build) => ({
+  id: b.id, fittingId: b.fittingId, club: b.club, label: b.label, head: b.head, loftDeg: b.loftDeg, hoselSetting: b.hoselSetting,
+  lieDeg: b.lieDeg, lengthIn: b.lengthIn, shaft: b.shaft, shaftWeightG: b.shaftWeightG, shaftFlex: b.shaftFlex, torqueDeg: b.torqueDeg,
+  grip: b.grip, swingWeight: b.swingWeight, addedMassG: b.addedMassG, addedMassWhere: b.addedMassWhere, notes: b.notes,
+});
+
+export async function listBuilds(actor: Actor, fittingId: string) {
+  await findVisibleFitting(actor, fittingId);
+  return (await Build.findAll({ where: { fittingId }, order: [['club', 'ASC'], ['label', 'ASC']] })).map(toBuild);
+}
+
+export async function updateBuild(actor: Actor, id: string, body: z.output<typeof buildSpecBodySchema>) {
+  requireStaff(actor);
+  const build = await Build.findByPk(id);
+  if (!build) throw notFound('That build');
+  await findVisibleFitting(actor, build.fittingId).catch(() => {
+    throw notFound('That build');
+  });
+  for (const [key, value] of Object.entries(body)) if (value !== undefined) build.set(key as keyof typeof body, value as never);
+  await build.save();
+  return toBuild(build);
+}

@@ -1,0 +1,43 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import type { Browser } from 'playwright-core';
+import { launchBrowser, PHONE, serveDemo, type ServedApp } from '../support/browser';
+
+jest.setTimeout(120_000);
+
+let served: ServedApp;
+let browser: Browser;
+beforeAll(async () => {
+  if (!fs.existsSync(path.resolve(__dirname, '../../dist/index.html'))) {
+    throw new Error('No web build in dist/: run npm test (it builds), or npm run build:web');
+  }
+  served = await serveDemo();
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+  await served?.close();
+});
+
+describe('sign-in in the browser', () => {
+  it('a demo fitter signing in at phone size sees the players list', async () => {
+    const page = await browser.newPage({ viewport: PHONE });
+    await page.goto(served.url);
+    await page.getByLabel('E-mail').fill('oskar@larchmere.example');
+    await page.getByLabel('Password').fill('ovalyard-demo');
+    await page.getByText('Sign in', { exact: true }).click();
+    await page.getByText('Nell Tarrant').first().waitFor({ timeout: 30_000 });
+    expect(await page.getByText('Amos Keverne').count()).toBeGreaterThan(0);
+    await page.close();
+  });
+
+  it('a wrong password shows the error in the page and stays on sign-in', async () => {
+    const page = await browser.newPage({ viewport: PHONE });
+    await page.goto(served.url);
+    await page.getByLabel('E-mail').fill('oskar@larchmere.example');
+    await page.getByLabel('Password').fill('not the password');
+    await page.getByText('Sign in', { exact: true }).click();
+    await page.getByText('That e-mail and password do not match an account.').waitFor({ timeout: 15_000 });
+    await page.close();
+  });
+});

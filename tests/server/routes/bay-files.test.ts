@@ -1,0 +1,228 @@
+import { QueryTypes } from 'sequelize';
+import request from 'supertest';
+import { buildFitting, buildShopWorld } from '@/fixtures/builders';
+import { createApp } from '@/server/app';
+import { createTestContext, type TestContext } from '../../support/test-db';
+import { APP_HEADER, signedInAgent } from '../../support/sign-in';
+
+let ctx: TestContext;
+let world: Awaited<ReturnType<typeof buildShopWorld>>;
+let rival: Awaited<ReturnType<typeof buildShopWorld>>;
+beforeAll(async () => {
+  ctx = await createTestContext({ UPLOAD_MAX_BYTES: String(64 * 1024), UPLOAD_MAX_ROWS: '400' });
+  world = await buildShopWorld();
+  rival = await buildShopWorld();
+});
+afterAll(async () => {
+  await ctx.close();
+});
+
+/** A small invented session: 7 irons with two shafts, speeds in mph, carry in yards, side as L/R. */
+function sessionCsv(rows = 12, extra = ''): string {
+  const lines = ['Club,Shaft,Ball Speed (mph),Club Speed (mph),Launch (deg),Spin (rpm),Carry (yds),Side (yds)'];
+  for (let i = 0; i < rows; i += 1) {
+    const shaft = i % 2 ? 'Graphite 65' : 'Steel 105';
+    const side = i % 3 === 0 ? `${(i % 5) + 1}.5 L` : `${(i % 4) + 0.5} R`;
+    lines.push(`7 Iron,${shaft},${(112 + (i % 5)).toFixed(1)},${(84 + (i % 3)).toFixed(1)},${(17 + (i % 4) * 0.5).toFixed(1)},${6600 + i * 20},${160 + (i % 6)},${side}`);
+  }
+  return lines.join('\n') + '\n' + extra;
+}
+
+const upload = (agent: ReturnType<typeof request.agent>, url: string, csv: string | Buffer, options: unknown = {}, name = 'session.csv') =>
+  agent.post(url).set(APP_HEADER).field('options', JSON.stringify(options)).attach('file', Buffer.isBuffer(csv) ? csv : Buffer.from(csv), name);
+
+async function shotCount(fittingId: string): Promise<number> {
+  const [row] = await ctx.sequelize.query<{ n: number }>('SELECT COUNT(*) AS n FROM shots WHERE fitting_id = ?', { replacements: [fittingId], type: QueryTypes.SELECT });
+  return Number(row.n);
+}
+async function fileCount(fittingId: string): Promise<number> {
+  const [row] = await ctx.sequelize.query<{ n: number }>('SELECT COUNT(*) AS n FROM bay_files WHERE fitting_id = ?', { replacements: [fittingId], type: QueryTypes.SELECT });
+  return Number(row.n);
+}
+
+describe('bay-file preview', () => {
+  it('preview of a CSV suggests a mapping with reasons and converts the first rows, storing nothing', async () => {
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const res = await upload(agent, `/api/fittings/${world.fitting.id}/bay-files/preview`, sessionCsv());
+    expect(res.status).toBe(200);
+    const byHeader = Object.fromEntries(res.body.suggestions.map((s: { header: string; field: string; unit: string | null }) => [s.header, s]));
+    expect(byHeader['Carry (yds)']).toMatchObject({ field: 'carry' });
+    expect(byHeader['Club']).toMatchObject({ field: 'club' });
+    expect(byHeader['Shaft']).toMatchObject({ field: 'build' });
+    expect(res.body.suggestions.every((s: { reason: string }) => s.reason.length > 0)).toBe(true);
+    expect(res.body.report).toMatchObject({ rows: 12, imported: 12, rejected: [] });
+    // 160 yd = 146.304 m exactly (NIST SP 811: 1 yd = 0.9144 m)
+    expect(res.body.shots[0].values.carry).toBeCloseTo(146.304, 6);
+    expect(res.body.shots[0].club).toBe('7I');
+    expect(res.body.shots[0].values.offline).toBeLessThan(0); // "1.5 L" is left
+    expect(await fileCount(world.fitting.id)).toBe(0);
+  });
+
+  it('preview without a file answers 400 NO_FILE', async () => {
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const res = await agent.post(`/api/fittings/${world.fitting.id}/bay-files/preview`).set(APP_HEADER).field('options', '{}');
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('NO_FILE');
+  });
+
+  it('preview of a binary file answers 400 NOT_TEXT', async () => {
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const res = await upload(agent, `/api/fittings/${world.fitting.id}/bay-files/preview`, Buffer.from([0x89, 0x50, 0x4e, 0x47, 0, 0, 1, 2]), {}, 'photo.png');
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('NOT_TEXT');
+  });
+
+  it('preview of an empty file answers 400 with a code', async () => {
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const res = await upload(agent, `/api/fittings/${world.fitting.id}/bay-files/preview`, '');
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toMatch(/EMPTY|NO_/);
+  });
+
+  it('an upload over the size cap answers 413 FILE_TOO_LARGE', async () => {
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const big = sessionCsv(12) + 'x'.repeat(70 * 1024);
+    const res = await upload(agent, `/api/fittings/${world.fitting.id}/bay-files/preview`, big);
+    expect(res.status).toBe(413);
+    expect(res.body.error.code).toBe('FILE_TOO_LARGE');
+  });
+
+  it('an upload over the row cap answers 400 TOO_MANY_ROWS', async () => {
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const res = await upload(agent, `/api/fittings/${world.fitting.id}/bay-files/preview`, sessionCsv(800));
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('TOO_MANY_ROWS');
+  });
+
+  it('bad options JSON answers 400', async () => {
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const res = await agent.post(`/api/fittings/${world.fitting.id}/bay-files/preview`).set(APP_HEADER).field('options', '{nope').attach('file', Buffer.from(sessionCsv()), 'a.csv');
+    expect(res.status).toBe(400);
+  });
+});
+
+describe('bay-file commit', () => {
+  it('commit stores the file, its shots and builds; the same file again answers 409', async () => {
+    const fitting = await buildFitting(world.shop, world.player, world.fitter);
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const res = await upload(agent, `/api/fittings/${fitting.id}/bay-files`, sessionCsv(), { saveRecipeAs: 'Bay 2 export' });
+    expect(res.status).toBe(201);
+    expect(res.body).toMatchObject({ rowCount: 12, shotCount: 12, fileName: 'session.csv' });
+    expect(res.body.report.groups).toEqual(expect.arrayContaining([{ club: '7I', build: 'Steel 105', n: 6 }, { club: '7I', build: 'Graphite 65', n: 6 }]));
+    expect(await shotCount(fitting.id)).toBe(12);
+    const builds = await agent.get(`/api/fittings/${fitting.id}/builds`);
+    expect(builds.body.map((b: { label: string }) => b.label).sort()).toEqual(['Graphite 65', 'Steel 105']);
+    const recipes = await agent.get('/api/recipes');
+    expect(recipes.body.map((r: { name: string }) => r.name)).toContain('Bay 2 export');
+    const again = await upload(agent, `/api/fittings/${fitting.id}/bay-files`, sessionCsv());
+    expect(again.status).toBe(409);
+    expect(again.body.error.code).toBe('DUPLICATE_FILE');
+    const fittingView = await agent.get(`/api/fittings/${fitting.id}`);
+    expect(fittingView.body.shotCount).toBe(12);
+  });
+
+  it('a row that cannot be read is reported with its row number and not stored; the others are', async () => {
+    const fitting = await buildFitting(world.shop, world.player, world.fitter);
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const csv = sessionCsv(6, '7 Iron,Steel 105,fast,85,17,6600,160,2 R\n');
+    const res = await upload(agent, `/api/fittings/${fitting.id}/bay-files`, csv);
+    expect(res.status).toBe(201);
+    expect(res.body.shotCount).toBe(6);
+    expect(res.body.report.rejected).toHaveLength(1);
+    expect(res.body.report.rejected[0]).toMatchObject({ row: 7 });
+    expect(res.body.report.rejected[0].reason).toMatch(/fast|number|read/i);
+    expect(await shotCount(fitting.id)).toBe(6);
+  });
+
+  it('a failure in the middle of storing leaves no bay file and no shot behind', async () => {
+    const fitting = await buildFitting(world.shop, world.player, world.fitter);
+    const failing = createApp({
+      sequelize: ctx.sequelize,
+      config: ctx.config,
+      log: () => {},
+      commitHooks: {
+        afterChunk: () => {
+          throw new Error('injected failure after the first chunk');
+        },
+      },
+    });
+    const agent = await signedInAgent(failing, world.fitter.email);
+    const res = await upload(agent, `/api/fittings/${fitting.id}/bay-files`, sessionCsv(300));
+    expect(res.status).toBe(500);
+    expect(await fileCount(fitting.id)).toBe(0);
+    expect(await shotCount(fitting.id)).toBe(0);
+  });
+
+  it('one build for the whole file overrides the build column', async () => {
+    const fitting = await buildFitting(world.shop, world.player, world.fitter);
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const res = await upload(agent, `/api/fittings/${fitting.id}/bay-files`, sessionCsv(), { builds: { mode: 'file', build: 'Test head B' } });
+    expect(res.status).toBe(201);
+    expect(res.body.report.groups).toEqual([{ club: '7I', build: 'Test head B', n: 12 }]);
+  });
+
+  it('re-mapping a file replaces its shots in one go and keeps the fitter’s decisions by row', async () => {
+    const fitting = await buildFitting(world.shop, world.player, world.fitter);
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const created = await upload(agent, `/api/fittings/${fitting.id}/bay-files`, sessionCsv());
+    const shots = (await agent.get(`/api/fittings/${fitting.id}/shots`)).body;
+    expect(shots).toHaveLength(12);
+    const first = shots.find((s: { row: number }) => s.row === 1);
+    expect((await agent.patch(`/api/shots/${first.id}`).set(APP_HEADER).send({ decision: 'drop' })).status).toBe(200);
+    const recipe = { ...created.body.recipe, columns: { ...created.body.recipe.columns, 'Carry (yds)': { field: 'carry', unit: 'm' } } };
+    const res = await agent.put(`/api/bay-files/${created.body.id}/recipe`).set(APP_HEADER).send({ recipe });
+    expect(res.status).toBe(200);
+    const after = (await agent.get(`/api/fittings/${fitting.id}/shots`)).body;
+    expect(after).toHaveLength(12);
+    const row1 = after.find((s: { row: number }) => s.row === 1);
+    expect(row1.values.carry).toBeCloseTo(160, 9); // now read as metres
+    expect(row1.decision).toBe('drop');
+  });
+
+  it('deleting a bay file removes its shots', async () => {
+    const fitting = await buildFitting(world.shop, world.player, world.fitter);
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const created = await upload(agent, `/api/fittings/${fitting.id}/bay-files`, sessionCsv());
+    expect((await agent.delete(`/api/bay-files/${created.body.id}`).set(APP_HEADER)).status).toBe(204);
+    expect(await shotCount(fitting.id)).toBe(0);
+  });
+});
+
+describe('bay-file access', () => {
+  it('a player may not upload to a fitting that is not remote (403), but may to their remote one', async () => {
+    const agent = await signedInAgent(ctx.app, world.playerUser.email);
+    const denied = await upload(agent, `/api/fittings/${world.fitting.id}/bay-files/preview`, sessionCsv());
+    expect(denied.status).toBe(403);
+    const remote = await buildFitting(world.shop, world.player, world.fitter, { remote: true });
+    const ok = await upload(agent, `/api/fittings/${remote.id}/bay-files`, sessionCsv());
+    expect(ok.status).toBe(201);
+  });
+
+  it('a player may not upload to another player’s remote fitting (404)', async () => {
+    const other = await buildFitting(world.shop, world.otherPlayer, world.fitter, { remote: true });
+    const agent = await signedInAgent(ctx.app, world.playerUser.email);
+    expect((await upload(agent, `/api/fittings/${other.id}/bay-files/preview`, sessionCsv())).status).toBe(404);
+  });
+
+  it('another shop’s fitter gets 404 on preview, list, shots and the raw file', async () => {
+    const fitting = await buildFitting(world.shop, world.player, world.fitter);
+    const own = await signedInAgent(ctx.app, world.fitter.email);
+    const created = await upload(own, `/api/fittings/${fitting.id}/bay-files`, sessionCsv());
+    const agent = await signedInAgent(ctx.app, rival.fitter.email);
+    expect((await upload(agent, `/api/fittings/${fitting.id}/bay-files/preview`, sessionCsv())).status).toBe(404);
+    expect((await agent.get(`/api/fittings/${fitting.id}/bay-files`)).status).toBe(404);
+    expect((await agent.get(`/api/fittings/${fitting.id}/shots`)).status).toBe(404);
+    expect((await agent.get(`/api/bay-files/${created.body.id}/raw`)).status).toBe(404);
+    expect((await agent.delete(`/api/bay-files/${created.body.id}`).set(APP_HEADER)).status).toBe(404);
+  });
+
+  it('without a session every bay-file route answers 401', async () => {
+    expect((await request(ctx.app).get(`/api/fittings/${world.fitting.id}/bay-files`)).status).toBe(401);
+    expect((await request(ctx.app).get('/api/recipes')).status).toBe(401);
+  });
+
+  it('a player may not list or save the shop’s recipes (403)', async () => {
+    const agent = await signedInAgent(ctx.app, world.playerUser.email);
+    expect((await agent.get('/api/recipes')).status).toBe(403);
+  });
+});

@@ -1,0 +1,60 @@
+/**
+ * Headless Chromium for the browser tests: Debian's chromium driven by playwright-core (no
+ * browser download), against the exported web app served by the real Express app.
+ */
+import { execSync } from 'node:child_process';
+import type { Server } from 'node:http';
+import path from 'node:path';
+import { chromium, type Browser } from 'playwright-core';
+import { createApp } from '@/server/app';
+import { loadConfig } from '@/server/config';
+import { seedDemo } from '@/server/seed/demo';
+import { createTestDatabase } from './test-db';
+
+export const PHONE = { width: 390, height: 844 };
+export const DESKTOP = { width: 1280, height: 800 };
+
+export function chromiumPath(): string {
+  return execSync('command -v chromium || command -v chromium-browser', { encoding: 'utf8', shell: '/bin/sh' }).trim();
+}
+
+export async function launchBrowser(): Promise<Browser> {
+  return chromium.launch({
+    executablePath: chromiumPath(),
+    headless: true,
+    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--disable-dev-shm-usage'],
+  });
+}
+
+export interface ServedApp {
+  url: string;
+  close: () => Promise<void>;
+}
+
+/** The web build from dist/ and the API on a free port, over a fresh database with the demo loaded. */
+export async function serveDemo(now = new Date()): Promise<ServedApp> {
+  const { sequelize, db, drop } = await createTestDatabase();
+  await seedDemo(sequelize, now);
+  const config = loadConfig({
+    NODE_ENV: 'test',
+    JWT_SECRET: 'e2e-secret-e2e-secret-e2e-secret-0000',
+    DB_PORT: String(db.port),
+    DB_NAME: db.name,
+    DB_USER: db.user,
+    DB_PASSWORD: db.password,
+    WEB_DIST: path.resolve(__dirname, '../../dist'),
+  });
+  const app = createApp({ sequelize, config, serveWeb: true, log: () => {} });
+  const server: Server = await new Promise((resolve) => {
+    const s = app.listen(0, '127.0.0.1', () => resolve(s));
+  });
+  const address = server.address();
+  const port = typeof address === 'object' && address ? address.port : 0;
+  return {
+    url: `http://127.0.0.1:${port}`,
+    close: async () => {
+      await new Promise((r) => server.close(r));
+      await drop();
+    },
+  };
+}
