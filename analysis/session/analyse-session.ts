@@ -1,0 +1,70 @@
+import { compareClubs } from '@/analysis/clubs';
+import type { Shot, ShotField } from '@/analysis/fields';
+import { compareBuilds } from '@/analysis/head-to-head';
+import type { BuildSample } from '@/analysis/head-to-head';
+import { buildLadder } from '@/analysis/ladder';
+import type { LadderGroup } from '@/analysis/ladder';
+import { analyseGroup } from './analyse-group';
+import type { AnalysedGroup } from './analyse-group';
+import type { GroupRef, SessionAnalysis, SessionOptions } from './session-types';
+import { shotColumns } from './shot-columns';
+
+function keptValues(column: Float64Array, kept: Uint8Array): Float64Array {
+  const out = new Float64Array(column.length);
+  let m = 0;
+  for (let j = 0; j < column.length; j++) if (kept[j] === 1) out[m++] = column[j];
+  return out.subarray(0, m);
+}
+
+function buildSample(group: AnalysedGroup): BuildSample {
+  const columns: Partial<Record<ShotField, Float64Array>> = {};
+  for (const [field, column] of Object.entries(group.columns.fields) as [ShotField, Float64Array][]) {
+    columns[field] = keptValues(column, group.kept);
+  }
+  columns.smashFactor = keptValues(group.columns.smashFactor, group.kept);
+  return { club: group.columns.club, build: group.columns.build, columns };
+}
+
+function findGroup(groups: AnalysedGroup[], ref: GroupRef): AnalysedGroup {
+  const found = groups.find((g) => g.columns.club === ref.club && g.columns.build === ref.build);
+  if (!found) throw new RangeError(`analyseSession: no shots for ${ref.club} with build ${ref.build ?? '(none)'}`);
+  return found;
+}
+
+/**
+ * The whole session's analysis: per group (club × build, in bag order then build label)
+ * summaries of every field present, smash factor, the descriptive and prediction ovals, and
+ * strays with their reasons; optionally a head-to-head of two groups; and the ladder.
+ * Strays are left out of the statistics unless includeStrays; the fitter's decisions (by row)
+ * override. All values in canonical units; the result is JSON-able. O(n · fields) expected.
+ * @throws RangeError when a compared group has no shots, or level is not in (0, 1)
+ * @example analyseSession(shots, { compare: [{ club: '7I', build: 'A' }, { club: '7I', build: 'B' }] }).headToHead?.fields.carry?.p
+ */
+export function analyseSession(shots: readonly Shot[], options: SessionOptions = {}): SessionAnalysis {
+  const level = options.level ?? 0.95;
+  if (!(level > 0 && level < 1)) throw new RangeError('analyseSession: level must lie in (0, 1)');
+  const settings = { level, includeStrays: options.includeStrays ?? false, decisions: options.decisions ?? {} };
+  const columns = shotColumns(shots);
+  let largest = 0;
+  for (const c of columns) largest = Math.max(largest, c.rows.length);
+  const scratch = new Float64Array(2 * largest);
+  const analysed = columns.map((c) => analyseGroup(c, settings, scratch));
+  analysed.sort(
+    (a, b) => compareClubs(a.columns.club, b.columns.club) || (a.columns.build ?? '').localeCompare(b.columns.build ?? ''),
+  );
+
+  const ladderGroups: LadderGroup[] = [];
+  for (const g of analysed) {
+    const carry = g.columns.fields.carry;
+    if (carry) ladderGroups.push({ club: g.columns.club, build: g.columns.build, carryM: keptValues(carry, g.kept) });
+  }
+  const result: SessionAnalysis = {
+    groups: analysed.map((g) => g.analysis),
+    ladder: buildLadder(ladderGroups, { chosenBuild: options.chosenBuild, loftByGroup: options.loftByGroup }),
+  };
+  if (options.compare) {
+    const [a, b] = options.compare;
+    result.headToHead = compareBuilds(buildSample(findGroup(analysed, a)), buildSample(findGroup(analysed, b)));
+  }
+  return result;
+}

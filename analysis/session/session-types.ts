@@ -1,0 +1,60 @@
+import type { ShotField } from '@/analysis/fields';
+import type { HeadToHead } from '@/analysis/head-to-head';
+import type { LadderRung } from '@/analysis/ladder';
+import type { Oval } from '@/analysis/ovals';
+import type { FieldSummary } from '@/analysis/statistics';
+import type { StrayDecision } from '@/analysis/strays';
+
+/** A group of shots: one club and one build. */
+export interface GroupRef {
+  club: string;
+  build: string | null;
+}
+
+/** Options of `analyseSession`. */
+export interface SessionOptions {
+  /** Oval level, default 0.95. */
+  level?: number;
+  /** Count strays in the statistics (default false: strays are left out). */
+  includeStrays?: boolean;
+  /** The fitter's keep/drop per row; overrides the stray rules. */
+  decisions?: Record<number, StrayDecision>;
+  /** Two groups for a head-to-head (A, B). */
+  compare?: [GroupRef, GroupRef];
+  /** Loft per group, keyed `${club}|${build ?? ''}`, for the ladder's loft steps. */
+  loftByGroup?: Record<string, number>;
+  /** Per club, the build the ladder uses; clubs not listed pool all their builds. */
+  chosenBuild?: Record<string, string | null>;
+}
+
+/** One stray as the session reports it: the row and the reason in plain words (metres). */
+export interface SessionStray {
+  row: number;
+  reason: string;
+}
+
+/** The oval fields of the session shape. */
+export type SessionOval = Oval;
+
+/** One group's analysis. JSON-able; canonical units. */
+export interface GroupAnalysis {
+  club: string;
+  build: string | null;
+  /** Shots in the group. */
+  n: number;
+  /** Shots used in the statistics. */
+  kept: number;
+  fields: Partial<Record<ShotField, FieldSummary>>;
+  /** From the smashFactor field where a shot has it, else ballSpeed / clubSpeed. */
+  smashFactor: FieldSummary | null;
+  oval: SessionOval | null;
+  predictionOval: SessionOval | null;
+  strays: SessionStray[];
+}
+
+/** The whole session's analysis. JSON-able; canonical units. */
+export interface SessionAnalysis {
+  groups: GroupAnalysis[];
+  headToHead?: HeadToHead;
+  ladder: LadderRung[];
+}

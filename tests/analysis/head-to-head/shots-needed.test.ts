@@ -1,0 +1,36 @@
+import { moreShotsNeeded } from '@/analysis/head-to-head';
+
+describe('moreShotsNeeded', () => {
+  // Normal approximation with z0.975 = 1.959964, z0.8 = 0.841621 (normal tables):
+  // 2·(2.801585)²·25/4 = 98.11 → 99 per build; 10 already hit → 89.
+  it('moreShotsNeeded with sd 5 and difference 2 gives 89 more after 10', () => {
+    expect(moreShotsNeeded({ nA: 10, nB: 10, sdA: 5, sdB: 5, diff: 2 })).toBe(89);
+  });
+
+  // Lehr, "Sixteen s-squared over d-squared", Statistics in Medicine 11 (1992): n ≈ 16·s²/d² per group
+  // at α 0.05 two-sided and power 0.8.
+  it('moreShotsNeeded agrees with Lehr’s 16·s²/d² rule within 2%', () => {
+    for (const [sd, diff] of [[4, 1], [10, 3], [2.5, 0.4]]) {
+      const total = moreShotsNeeded({ nA: 2, nB: 2, sdA: sd, sdB: sd, diff })! + 2;
+      const lehr = (16 * sd * sd) / (diff * diff);
+      expect(Math.abs(total - lehr) / lehr).toBeLessThan(0.02);
+    }
+  });
+
+  it('moreShotsNeeded uses the pooled variance and the smaller group', () => {
+    // Pooled s² = (9·16 + 19·36)/28 = 29.571; 15.6978·29.571/4 = 116.05 → 117; minus 10 → 107.
+    expect(moreShotsNeeded({ nA: 10, nB: 20, sdA: 4, sdB: 6, diff: -2 })).toBe(107);
+  });
+
+  it('moreShotsNeeded when enough shots are in gives 0', () => {
+    expect(moreShotsNeeded({ nA: 500, nB: 500, sdA: 5, sdB: 5, diff: 2 })).toBe(0);
+  });
+
+  it('moreShotsNeeded with equal means gives null', () => {
+    expect(moreShotsNeeded({ nA: 5, nB: 5, sdA: 1, sdB: 1, diff: 0 })).toBeNull();
+  });
+
+  it('moreShotsNeeded with one shot in a group throws', () => {
+    expect(() => moreShotsNeeded({ nA: 1, nB: 5, sdA: 1, sdB: 1, diff: 1 })).toThrow(RangeError);
+  });
+});

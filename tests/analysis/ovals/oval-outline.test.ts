@@ -1,0 +1,36 @@
+import { groundOval, ovalOutline } from '@/analysis/ovals';
+import { sampleCovariance2 } from '@/analysis/statistics';
+
+const OFFLINE = [-6, 2, 9, -1, 4, -8, 3, 0];
+const CARRY = [142, 150, 158, 147, 151, 139, 154, 149];
+
+describe('ovalOutline', () => {
+  // Every outline point lies on {d : dᵀ S⁻¹ d = k²}, S the sample covariance and k² = χ²₂(0.95).
+  it('ovalOutline points all lie at the oval’s Mahalanobis distance', () => {
+    const oval = groundOval(OFFLINE, CARRY);
+    const c = sampleCovariance2(OFFLINE, CARRY);
+    const det = c.xx * c.yy - c.xy * c.xy;
+    for (const p of ovalOutline(oval, 37)) {
+      const dx = p.offline - c.meanX;
+      const dy = p.carry - c.meanY;
+      const m2 = (c.yy * dx * dx - 2 * c.xy * dx * dy + c.xx * dy * dy) / det;
+      expect(m2).toBeCloseTo(-2 * Math.log(0.05), 9);
+    }
+  });
+
+  it('ovalOutline starts at the far end of the long axis', () => {
+    const oval = groundOval(OFFLINE, CARRY);
+    const [first] = ovalOutline(oval, 8);
+    const t = (oval.angleDeg * Math.PI) / 180;
+    expect(first.offline).toBeCloseTo(oval.centerOffline + oval.semiMajor * Math.sin(t), 12);
+    expect(first.carry).toBeCloseTo(oval.centerCarry + oval.semiMajor * Math.cos(t), 12);
+  });
+
+  it('ovalOutline gives as many points as segments', () => {
+    expect(ovalOutline(groundOval(OFFLINE, CARRY))).toHaveLength(64);
+  });
+
+  it('ovalOutline with fewer than 3 segments throws', () => {
+    expect(() => ovalOutline(groundOval(OFFLINE, CARRY), 2)).toThrow(RangeError);
+  });
+});

@@ -1,0 +1,176 @@
+import fc from 'fast-check';
+import { mean, quantile, sampleStandardDeviation } from 'simple-statistics';
+import type { Shot, ShotValues } from '@/analysis/fields';
+import { analyseSession } from '@/analysis/session';
+
+// Invented session: one player, two 7-iron builds, a driver, a pitching wedge; row 5 a thin strike.
+function shot(row: number, club: string, build: string | null, values: ShotValues): Shot {
+  return { row, club, build, values, derived: [] };
+}
+
+const SEVEN_A: [number, number, number, number][] = [
+  // carry, offline, ballSpeed, clubSpeed
+  [148, -3, 53.0, 40.0],
+  [150, 2, 53.4, 40.1],
+  [147, 0, 52.8, 39.8],
+  [149, 1, 53.1, 40.0],
+  [112, -4, 45.0, 39.9],
+  [151, -1, 53.6, 40.2],
+  [148, 3, 53.0, 39.9],
+  [146, 0, 52.6, 39.7],
+];
+
+function session(): Shot[] {
+  const shots: Shot[] = [];
+  SEVEN_A.forEach(([carry, offline, ballSpeed, clubSpeed], i) =>
+    shots.push(shot(i + 1, '7I', 'A', { carry, offline, ballSpeed, clubSpeed, spinRate: 6500 + 40 * i })),
+  );
+  [152, 155, 151, 154, 153, 150].forEach((carry, i) =>
+    shots.push(shot(20 + i, '7I', 'B', { carry, offline: [4, -2, 1, 6, -3, 0][i], ballSpeed: 54 + i / 10, clubSpeed: 40, smashFactor: 1.36 })),
+  );
+  shots.push(shot(40, 'DR', null, { carry: 228, offline: 8 }));
+  shots.push(shot(41, 'DR', null, { carry: 232, offline: -5 }));
+  shots.push(shot(50, 'PW', 'X', { carry: 118 }));
+  return shots;
+}
+
+describe('analyseSession', () => {
+  it('analyseSession sorts groups in bag order, then by build', () => {
+    const groups = analyseSession(session()).groups;
+    expect(groups.map((g) => [g.club, g.build])).toEqual([['DR', null], ['7I', 'A'], ['7I', 'B'], ['PW', 'X']]);
+  });
+
+  it('analyseSession by default flags the thin strike and leaves it out', () => {
+    const a = analyseSession(session()).groups[1];
+    expect(a.n).toBe(8);
+    expect(a.kept).toBe(7);
+    expect(a.strays.map((s) => s.row)).toEqual([5]);
+    expect(a.strays[0].reason).toMatch(/^carry 112 m is far short of this group's median 148 m/);
+    expect(a.fields.carry!.n).toBe(7);
+    expect(a.fields.carry!.min).toBe(146);
+  });
+
+  // Reference library: simple-statistics' mean, sampleStandardDeviation and quantile (type 7).
+  it('analyseSession field summaries agree with simple-statistics on the kept shots', () => {
+    const carry = analyseSession(session()).groups[1].fields.carry!;
+    const kept = SEVEN_A.map((s) => s[0]).filter((c) => c !== 112);
+    expect(carry.mean).toBeCloseTo(mean(kept), 12);
+    expect(carry.sd!).toBeCloseTo(sampleStandardDeviation(kept), 12);
+    expect(carry.median).toBeCloseTo(quantile(kept, 0.5), 12);
+    expect(carry.q1).toBeCloseTo(quantile(kept, 0.25), 12);
+    expect(carry.q3).toBeCloseTo(quantile(kept, 0.75), 12);
+  });
+
+  it('analyseSession with includeStrays counts the stray but still lists it', () => {
+    const a = analyseSession(session(), { includeStrays: true }).groups[1];
+    expect(a.kept).toBe(8);
+    expect(a.fields.carry!.min).toBe(112);
+    expect(a.strays.map((s) => s.row)).toEqual([5]);
+  });
+
+  it('analyseSession with the fitter’s decisions keeps a stray and drops a good shot', () => {
+    const a = analyseSession(session(), { decisions: { 5: 'keep', 2: 'drop' } }).groups[1];
+    expect(a.kept).toBe(7);
+    expect(a.fields.carry!.min).toBe(112);
+    expect(a.fields.carry!.max).toBe(151);
+    expect(a.strays).toEqual([
+      { row: 2, reason: 'dropped by the fitter' },
+      expect.objectContaining({ row: 5, reason: expect.stringMatching(/\(kept by the fitter\)$/) }),
+    ]);
+  });
+
+  it('analyseSession derives smash factor from speeds, or takes the field when present', () => {
+    const groups = analyseSession(session()).groups;
+    const keptA = SEVEN_A.filter((s) => s[0] !== 112).map((s) => s[2] / s[3]);
+    expect(groups[1].smashFactor!.mean).toBeCloseTo(mean(keptA), 12);
+    expect(groups[1].fields.smashFactor).toBeUndefined();
+    expect(groups[2].smashFactor!.mean).toBeCloseTo(1.36, 12);
+    expect(groups[0].smashFactor).toBeNull();
+  });
+
+  it('analyseSession with fewer than 3 shots gives no oval, and one shot no sd', () => {
+    const groups = analyseSession(session()).groups;
+    expect(groups[0].oval).toBeNull();
+    expect(groups[0].predictionOval).toBeNull();
+    expect(groups[0].fields.carry!.sd).not.toBeNull();
+    expect(groups[3].fields.carry!.sd).toBeNull();
+    expect(groups[3].oval).toBeNull();
+  });
+
+  it('analyseSession gives a prediction oval wider than the descriptive one', () => {
+    const a = analyseSession(session()).groups[1];
+    expect(a.oval!.level).toBe(0.95);
+    expect(a.predictionOval!.semiMajor).toBeGreaterThan(a.oval!.semiMajor);
+    expect(a.predictionOval!.angleDeg).toBeCloseTo(a.oval!.angleDeg, 12);
+  });
+
+  it('analyseSession with a level of 0.68 gives smaller ovals', () => {
+    const wide = analyseSession(session()).groups[1].oval!;
+    const narrow = analyseSession(session(), { level: 0.68 }).groups[1].oval!;
+    expect(narrow.level).toBe(0.68);
+    // Semi-axes scale with sqrt of the χ²₂ quantile: sqrt(2.278868566 / 5.991464547) (CHECKS.md values).
+    expect(narrow.semiMajor / wide.semiMajor).toBeCloseTo(Math.sqrt(2.278868566 / 5.991464547), 8);
+  });
+
+  it('analyseSession with compare gives a head-to-head of the two builds', () => {
+    const result = analyseSession(session(), { compare: [{ club: '7I', build: 'A' }, { club: '7I', build: 'B' }] });
+    const h = result.headToHead!;
+    expect(h.a).toEqual({ club: '7I', build: 'A' });
+    expect(h.fields.carry!.diff).toBeLessThan(0);
+    expect(h.fields.carry!.ci95[0]).toBeLessThan(h.fields.carry!.ci95[1]);
+    expect(h.fields.smashFactor).toBeDefined();
+    expect(h.ovalAreaRatio).toBeGreaterThan(0);
+  });
+
+  it('analyseSession with compare naming a missing group throws', () => {
+    expect(() => analyseSession(session(), { compare: [{ club: '7I', build: 'A' }, { club: '7I', build: 'Z' }] })).toThrow(RangeError);
+  });
+
+  it('analyseSession without compare has no head-to-head', () => {
+    expect(analyseSession(session())).not.toHaveProperty('headToHead');
+  });
+
+  it('analyseSession gives a ladder from the kept carries', () => {
+    const ladder = analyseSession(session()).ladder;
+    expect(ladder.map((r) => r.club)).toEqual(['DR', '7I', 'PW']);
+    expect(ladder[1].n).toBe(13);
+  });
+
+  it('analyseSession with a level outside (0, 1) throws', () => {
+    expect(() => analyseSession(session(), { level: 1 })).toThrow(RangeError);
+  });
+
+  it('analyseSession of no shots gives empty groups and ladder', () => {
+    expect(analyseSession([])).toEqual({ groups: [], ladder: [] });
+  });
+
+  it('analyseSession result survives a JSON round trip unchanged', () => {
+    const result = analyseSession(session(), { compare: [{ club: '7I', build: 'A' }, { club: '7I', build: 'B' }] });
+    expect(JSON.parse(JSON.stringify(result))).toEqual(result);
+  });
+
+  it('analyseSession group shape has exactly the agreed keys', () => {
+    const g = analyseSession(session()).groups[1];
+    expect(Object.keys(g).sort()).toEqual(['build', 'club', 'fields', 'kept', 'n', 'oval', 'predictionOval', 'smashFactor', 'strays'].sort());
+    expect(Object.keys(g.fields.carry!).sort()).toEqual(['max', 'mean', 'median', 'min', 'n', 'q1', 'q3', 'sd'].sort());
+    expect(Object.keys(g.oval!).sort()).toEqual(['angleDeg', 'area', 'centerCarry', 'centerOffline', 'level', 'semiMajor', 'semiMinor'].sort());
+  });
+
+  // Property: shuffling the shots changes nothing (strays included).
+  it('analyseSession of shuffled shots gives the same analysis', () => {
+    const shots = session();
+    fc.assert(
+      fc.property(fc.shuffledSubarray(shots, { minLength: shots.length }), (shuffled) => {
+        const a = analyseSession(shots);
+        const b = analyseSession(shuffled);
+        expect(b.groups.map((g) => g.strays)).toEqual(a.groups.map((g) => g.strays));
+        b.groups.forEach((g, i) => {
+          expect(g.kept).toBe(a.groups[i].kept);
+          expect(g.fields.carry!.mean).toBeCloseTo(a.groups[i].fields.carry!.mean, 9);
+          if (g.oval) expect(g.oval.area).toBeCloseTo(a.groups[i].oval!.area, 9);
+        });
+      }),
+      { numRuns: 50 },
+    );
+  });
+});

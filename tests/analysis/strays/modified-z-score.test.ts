@@ -1,0 +1,67 @@
+import fc from 'fast-check';
+import { median, medianAbsoluteDeviation } from 'simple-statistics';
+import { MODIFIED_Z_LIMIT, modifiedZScores } from '@/analysis/strays';
+
+describe('modifiedZScores', () => {
+  // Iglewicz & Hoaglin (1993), "How to Detect and Handle Outliers"; NIST/SEMATECH e-Handbook §1.3.5.17:
+  // M = 0.6745·(x − median)/MAD, flag |M| > 3.5. Here median 148 and MAD 1, so M(112) = 0.6745·(−36) = −24.282.
+  it('modifiedZScores on a short carry list gives 0.6745·(x − median)/MAD', () => {
+    const z = modifiedZScores([148, 150, 147, 149, 112]);
+    expect(z.median).toBe(148);
+    expect(z.mad).toBe(1);
+    expect(z.scale).toBe('mad');
+    expect(z.scores[4]).toBeCloseTo(-24.282, 9);
+    expect(z.scores[1]).toBeCloseTo(1.349, 9);
+  });
+
+  it('MODIFIED_Z_LIMIT is Iglewicz and Hoaglin’s 3.5', () => {
+    expect(MODIFIED_Z_LIMIT).toBe(3.5);
+  });
+
+  // Reference library: simple-statistics' median and medianAbsoluteDeviation in the published formula.
+  it('modifiedZScores on random data agrees with the formula over simple-statistics', () => {
+    fc.assert(
+      fc.property(fc.array(fc.integer({ min: 0, max: 10000 }), { minLength: 3, maxLength: 200 }), (ints) => {
+        const xs = ints.map((i) => 100 + i / 50);
+        const mad = medianAbsoluteDeviation(xs);
+        fc.pre(mad > 0);
+        const z = modifiedZScores(xs);
+        const med = median(xs);
+        xs.forEach((x, i) => expect(z.scores[i]).toBeCloseTo((0.6745 * (x - med)) / mad, 9));
+      }),
+    );
+  });
+
+  // MAD 0 → mean absolute deviation 0.8 about median 5; M(9) = 4/(1.253314·0.8) = 3.989 (computed; the
+  // 1.253314 fallback convention is from memory, see the source file).
+  it('modifiedZScores with MAD 0 scales by the mean absolute deviation instead', () => {
+    const z = modifiedZScores([5, 5, 5, 5, 9]);
+    expect(z.mad).toBe(0);
+    expect(z.scale).toBe('meanAbsoluteDeviation');
+    expect(z.scores[4]).toBeCloseTo(4 / (1.253314 * 0.8), 9);
+    expect(z.scores[0]).toBe(0);
+  });
+
+  it('modifiedZScores on equal values gives all zeros, never a division by zero', () => {
+    const z = modifiedZScores([1.45, 1.45, 1.45]);
+    expect(z.scale).toBe('none');
+    expect([...z.scores]).toEqual([0, 0, 0]);
+  });
+
+  it('modifiedZScores with missing values scores them NaN and skips them', () => {
+    const z = modifiedZScores([148, Number.NaN, 150, 147]);
+    expect(z.median).toBe(148);
+    expect(z.scores[1]).toBeNaN();
+  });
+
+  it('modifiedZScores of shuffled values gives each value the same score', () => {
+    fc.assert(
+      fc.property(fc.array(fc.integer({ min: 0, max: 300 }), { minLength: 3, maxLength: 60 }).chain((xs) => fc.tuple(fc.constant(xs), fc.shuffledSubarray(xs, { minLength: xs.length }))), ([xs, ys]) => {
+        const a = modifiedZScores(xs);
+        const b = modifiedZScores(ys);
+        const byValue = new Map(xs.map((x, i) => [x, a.scores[i]]));
+        ys.forEach((y, i) => expect(b.scores[i]).toBe(byValue.get(y)));
+      }),
+    );
+  });
+});

@@ -1,0 +1,84 @@
+import fc from 'fast-check';
+import { GROUND_DISTANCE_LIMIT, robustGroundDistances } from '@/analysis/strays';
+
+/** Seeded normal pairs (mulberry32 + Box–Muller) with sd sx, sy and correlation rho. */
+function normalPairs(n: number, sx: number, sy: number, rho: number, seed: number): { x: number[]; y: number[] } {
+  let a = seed >>> 0;
+  const next = () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+  const x: number[] = [];
+  const y: number[] = [];
+  for (let i = 0; i < n; i++) {
+    const r = Math.sqrt(-2 * Math.log(1 - next()));
+    const t = 2 * Math.PI * next();
+    const u = r * Math.cos(t);
+    const v = r * Math.sin(t);
+    x.push(sx * u);
+    y.push(150 + sy * (rho * u + Math.sqrt(1 - rho * rho) * v));
+  }
+  return { x, y };
+}
+
+describe('robustGroundDistances', () => {
+  // sqrt(χ²₂(0.999)) = sqrt(−2·ln 0.001) = 3.7169 (closed form of the χ² quantile, 2 df).
+  it('GROUND_DISTANCE_LIMIT is sqrt(−2·ln 0.001)', () => {
+    expect(GROUND_DISTANCE_LIMIT).toBeCloseTo(3.716922, 6);
+  });
+
+  // Consistency: 1.4826·MAD estimates σ of normal data, and Gnanadesikan & Kettenring's identity
+  // estimates ρ (Gnanadesikan & Kettenring, Biometrics 28, 1972). Large seeded sample, loose tolerance.
+  it('robustGroundDistances on a large normal sample recovers its scales and correlation', () => {
+    const { x, y } = normalPairs(20000, 6, 4, 0.5, 11);
+    const r = robustGroundDistances(x, y);
+    expect(r.scaleOffline / 6).toBeCloseTo(1, 1);
+    expect(r.scaleCarry / 4).toBeCloseTo(1, 1);
+    expect(Math.abs(r.correlation - 0.5)).toBeLessThan(0.04);
+    expect(Math.abs(r.centerCarry - 150)).toBeLessThan(0.2);
+    // Squared distances of normal data follow χ²₂: about 0.1% beyond the limit.
+    const beyond = [...r.distances].filter((d) => d > GROUND_DISTANCE_LIMIT).length / x.length;
+    expect(beyond).toBeLessThan(0.004);
+  });
+
+  it('robustGroundDistances with one shot far right gives it a distance beyond the limit', () => {
+    const { x, y } = normalPairs(30, 5, 5, 0, 3);
+    x.push(60);
+    y.push(150);
+    const r = robustGroundDistances(x, y);
+    expect(r.distances[30]).toBeGreaterThan(GROUND_DISTANCE_LIMIT);
+  });
+
+  it('robustGroundDistances with a missing value gives NaN there', () => {
+    const r = robustGroundDistances([0, 1, Number.NaN, -1, 2], [150, 151, 150, 149, 150]);
+    expect(r.distances[2]).toBeNaN();
+    expect(r.distances[0]).toBeGreaterThanOrEqual(0);
+  });
+
+  it('robustGroundDistances with no spread across uses carry alone', () => {
+    const r = robustGroundDistances([0, 0, 0, 0, 0], [140, 150, 151, 149, 150]);
+    expect(r.scaleOffline).toBe(0);
+    expect(Number.isFinite(r.distances[0])).toBe(true);
+  });
+
+  // Property: the distance does not change when the shots are moved, stretched per axis or shuffled.
+  it('robustGroundDistances is unchanged by shifting, axis scaling and shuffling', () => {
+    const pts = fc.array(fc.tuple(fc.integer({ min: -2000, max: 2000 }), fc.integer({ min: -2000, max: 2000 })), { minLength: 5, maxLength: 40 });
+    fc.assert(
+      fc.property(pts, fc.integer({ min: 1, max: 30 }), fc.integer({ min: -50, max: 50 }), (ps, k, shift) => {
+        const x = ps.map((p) => p[0] / 100);
+        const y = ps.map((p) => 150 + p[1] / 100);
+        const base = robustGroundDistances(x, y).distances;
+        const moved = robustGroundDistances(x.map((v) => (v + shift) * k), y.map((v) => v - shift)).distances;
+        const reversed = robustGroundDistances([...x].reverse(), [...y].reverse()).distances;
+        base.forEach((d, i) => {
+          expect(moved[i]).toBeCloseTo(d, 6);
+          expect(reversed[x.length - 1 - i]).toBeCloseTo(d, 9);
+        });
+      }),
+    );
+  });
+});
