@@ -60,7 +60,7 @@ export interface Config {
  * Reads the configuration from the environment.
  * @throws with every problem listed when a value is invalid or unsafe for production
  */
-export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
+export function loadConfig(source: Record<string, string | undefined> = process.env): Config {
   const parsed = envSchema.safeParse(source);
   if (!parsed.success) {
     const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);

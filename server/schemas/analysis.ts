@@ -17,5 +17,9 @@ export const analysisQuerySchema = z
     all: z.enum(['0', '1', 'true', 'false']).default('0').transform((v) => v === '1' || v === 'true'),
     a: groupRef.optional(),
     b: groupRef.optional(),
+    /** Course conditions to carry the figures over to (ball-flight model). */
+    toTemperatureC: z.coerce.number().min(-20).max(50).optional(),
+    toAltitudeM: z.coerce.number().min(-430).max(4500).optional(),
+    toHumidityPct: z.coerce.number().min(0).max(100).optional(),
   })
   .refine((q) => (q.a === undefined) === (q.b === undefined), { message: 'Give both builds to compare (a and b).', path: ['b'] });

@@ -2,6 +2,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import type { Sequelize } from 'sequelize';
 import { Fitting, Player, Shop, User } from '../models';
+import { commitBayFile } from '../services/bay-files';
 import { hashPassword } from '../services/passwords';
 
 interface Scenario {
@@ -21,6 +22,8 @@ interface Scenario {
     ball: string;
     notes: string;
     remote: boolean;
+    /** A demo bay file in fixtures/demo/, imported by the fitter. */
+    bayFile?: string;
   }[];
 }
 
@@ -79,6 +82,15 @@ export async function seedDemo(sequelize: Sequelize, now: Date, after?: DemoHook
       fittings.set(String(i), fitting);
     }
   });
+  // The demo sessions go in through the real import path, as a fitter would upload them.
+  for (const [i, f] of scenario.fittings.entries()) {
+    if (!f.bayFile) continue;
+    const fitting = fittings.get(String(i))!;
+    const fitter = await User.findOne({ where: { email: f.fitter } });
+    const actor = { id: fitter!.id, role: fitter!.role, shopId: fitter!.shopId, playerId: null };
+    const file = { name: f.bayFile, buffer: fs.readFileSync(path.join(DEMO_DIR, f.bayFile)) };
+    await commitBayFile(sequelize, actor, fitting.id, file, { builds: { mode: 'column' } }, { maxRows: 200_000 });
+  }
   if (after) await after({ sequelize, fittings, scenario });
   return true;
 }

@@ -5,10 +5,12 @@
  */
 import type { Sequelize } from 'sequelize';
 import type { Shot } from '../../analysis/fields';
+import { normaliseShot, type AirConditions } from '../../analysis/flight';
 import { analyseSession, type GroupRef, type SessionAnalysis } from '../../analysis/session';
 import { HttpError } from '../errors';
 import { Build } from '../models';
 import type { Actor } from './actor';
+import { airOf } from './bay-files';
 import { findVisibleFitting } from './fittings';
 import { loadFittingShots } from './shot-store';
 
@@ -16,6 +18,8 @@ export interface AnalysisQuery {
   level: number;
   includeStrays: boolean;
   compare?: [GroupRef, GroupRef];
+  /** Carry the shots over to these conditions (the player's course) with the ball-flight model. */
+  to?: AirConditions;
 }
 
 export interface PlotShot {
@@ -32,12 +36,22 @@ export interface PlotShot {
 
 export interface FittingAnalysis {
   analysis: SessionAnalysis;
+  /** The fitting's measured air, and the conditions the figures were carried over to (if any). */
+  air: { measured: AirConditions; normalisedTo: AirConditions | null };
   shots: PlotShot[];
 }
 
 export async function analyseFitting(sequelize: Sequelize, actor: Actor, fittingId: string, query: AnalysisQuery): Promise<FittingAnalysis> {
-  await findVisibleFitting(actor, fittingId);
+  const fitting = await findVisibleFitting(actor, fittingId);
+  const measuredAir = airOf(fitting);
   const stored = await loadFittingShots(sequelize, fittingId);
+  if (query.to) {
+    for (const s of stored) {
+      const n = normaliseShot(s.values, measuredAir, query.to);
+      s.values = n.values;
+      s.derived = [...new Set([...s.derived, ...n.derived])];
+    }
+  }
   const builds = await Build.findAll({ where: { fittingId }, attributes: ['club', 'label', 'loftDeg'] });
   const loftByGroup: Record<string, number> = {};
   for (const b of builds) if (b.loftDeg != null) loftByGroup[`${b.club}|${b.label}`] = b.loftDeg;
@@ -56,6 +70,7 @@ export async function analyseFitting(sequelize: Sequelize, actor: Actor, fitting
   const strayIds = new Set(analysis.groups.flatMap((g) => g.strays.map((s) => s.row)));
   return {
     analysis,
+    air: { measured: measuredAir, normalisedTo: query.to ?? null },
     shots: stored.map((s) => ({
       id: s.id,
       bayFileId: s.bayFileId,

@@ -4,7 +4,8 @@
  */
 import { createHash } from 'node:crypto';
 import type { Sequelize, Transaction } from 'sequelize';
-import type { Shot } from '../../analysis/fields';
+import type { Shot, ShotValues } from '../../analysis/fields';
+import { fillFlightFields, type AirConditions } from '../../analysis/flight';
 import { ImportError, importBayFile, recipeSchema, type ImportResult, type Recipe } from '../../analysis/import';
 import { HttpError, notFound } from '../errors';
 import { BayFile, Build, Fitting, Recipe as RecipeModel } from '../models';
@@ -70,14 +71,28 @@ function buildOptions(builds: BuildAssignment): { defaultBuild: string | null; b
   return { defaultBuild: builds.fallback ?? null };
 }
 
-/** Runs the import library, mapping its errors to 400s a fitter can read. */
-export function runImport(text: string, recipe: Recipe | undefined, builds: BuildAssignment, limits: BayFileLimits): ImportResult {
+/** The air of a fitting, for the ball-flight model (unset values: the standard atmosphere). */
+export function airOf(fitting: Pick<Fitting, 'temperatureC' | 'altitudeM' | 'humidityPct'>): AirConditions {
+  return {
+    ...(fitting.temperatureC != null ? { temperatureC: fitting.temperatureC } : {}),
+    ...(fitting.altitudeM != null ? { altitudeM: fitting.altitudeM } : {}),
+    ...(fitting.humidityPct != null ? { humidityPct: fitting.humidityPct } : {}),
+  };
+}
+
+/**
+ * Runs the import library, mapping its errors to 400s a fitter can read. Shots with launch
+ * conditions but no carry, offline, apex, descent or flight time get them from the
+ * ball-flight model in the fitting's air, marked as derived.
+ */
+export function runImport(text: string, recipe: Recipe | undefined, builds: BuildAssignment, limits: BayFileLimits, air: AirConditions = {}): ImportResult {
   if (countLines(text) > limits.maxRows + 50) {
     throw new HttpError(400, 'TOO_MANY_ROWS', `This file has more than ${limits.maxRows.toLocaleString('en')} rows, the most one import takes. Split it and import the parts.`);
   }
   const b = buildOptions(builds);
   try {
-    const result = importBayFile(text, { recipe, defaultBuild: b.defaultBuild, buildByClub: b.buildByClub });
+    const fillFlight = (values: ShotValues) => fillFlightFields(values, air);
+    const result = importBayFile(text, { recipe, defaultBuild: b.defaultBuild, buildByClub: b.buildByClub, fillFlight });
     if (b.forceBuild) for (const s of result.shots) s.build = b.forceBuild;
     if (result.rows > limits.maxRows) {
       throw new HttpError(400, 'TOO_MANY_ROWS', `This file has ${result.rows.toLocaleString('en')} rows; one import takes at most ${limits.maxRows.toLocaleString('en')}.`);
@@ -116,9 +131,9 @@ export const contentHash = (text: string) => createHash('sha256').update(text).d
 
 /** What an import would do: the mapping, warnings, the first converted rows, the rejected rows. Stores nothing. */
 export async function previewBayFile(actor: Actor, fittingId: string, file: UploadedFile, options: ParsedImportOptions, limits: BayFileLimits) {
-  await findWritableFitting(actor, fittingId);
+  const fitting = await findWritableFitting(actor, fittingId);
   const text = decodeUpload(file.buffer);
-  const result = runImport(text, await recipeOf(actor, options), options.builds, limits);
+  const result = runImport(text, await recipeOf(actor, options), options.builds, limits, airOf(fitting));
   const hash = contentHash(text);
   const duplicate = await BayFile.findOne({ where: { fittingId, contentHash: hash }, attributes: ['id', 'fileName'] });
   return {
@@ -174,9 +189,9 @@ export async function commitBayFile(
   limits: BayFileLimits,
   hooks: CommitHooks = {},
 ): Promise<BayFileDto> {
-  await findWritableFitting(actor, fittingId);
+  const fitting = await findWritableFitting(actor, fittingId);
   const text = decodeUpload(file.buffer);
-  const result = runImport(text, await recipeOf(actor, options), options.builds, limits);
+  const result = runImport(text, await recipeOf(actor, options), options.builds, limits, airOf(fitting));
   if (result.shots.length === 0) {
     throw new HttpError(400, 'NO_SHOTS', 'No row of this file could be imported; nothing was stored. See the rejected rows in the preview.');
   }
@@ -237,8 +252,8 @@ export async function getBayFileText(actor: Actor, id: string): Promise<{ fileNa
 /** Applies a new recipe to a stored file: its shots are replaced in one transaction; decisions by row stay. */
 export async function remapBayFile(sequelize: Sequelize, actor: Actor, id: string, recipe: Recipe, builds: BuildAssignment, limits: BayFileLimits): Promise<BayFileDto> {
   const bayFile = await findVisibleBayFile(actor, id);
-  await findWritableFitting(actor, bayFile.fittingId);
-  const result = runImport(bayFile.rawText, recipe, builds, limits);
+  const fitting = await findWritableFitting(actor, bayFile.fittingId);
+  const result = runImport(bayFile.rawText, recipe, builds, limits, airOf(fitting));
   if (result.shots.length === 0) throw new HttpError(400, 'NO_SHOTS', 'With this recipe no row could be imported; the file was left as it was.');
   await sequelize.transaction(async (transaction) => {
     const decisions = await decisionsOf(sequelize, bayFile.id, transaction);

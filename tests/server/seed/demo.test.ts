@@ -1,0 +1,26 @@
+import { QueryTypes } from 'sequelize';
+import { User } from '@/server/models';
+import { seedDemo } from '@/server/seed/demo';
+import { createTestDatabase } from '../../support/test-db';
+
+let db: Awaited<ReturnType<typeof createTestDatabase>>;
+beforeAll(async () => {
+  db = await createTestDatabase();
+});
+afterAll(async () => {
+  await db.drop();
+});
+
+describe('seedDemo', () => {
+  it('seedDemo on an empty database loads the scenario and imports its bay files; a second run does nothing', async () => {
+    expect(await seedDemo(db.sequelize, new Date('2026-12-01T12:00:00Z'))).toBe(true);
+    expect(await User.count()).toBe(4); // owner, two fitters, one player with a sign-in
+    const [shots] = await db.sequelize.query<{ n: number }>('SELECT COUNT(*) AS n FROM shots', { type: QueryTypes.SELECT });
+    expect(Number(shots.n)).toBe(140);
+    // The remote fitting's file has no carry: the ball-flight model filled it, marked as derived.
+    const [filled] = await db.sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM shots WHERE club = '4H' AND carry IS NOT NULL AND derived_mask > 0", { type: QueryTypes.SELECT });
+    expect(Number(filled.n)).toBe(8);
+    expect(await seedDemo(db.sequelize, new Date())).toBe(false);
+    expect(await User.count()).toBe(4); // owner, two fitters, one player with a sign-in
+  });
+});
