@@ -56,7 +56,12 @@ module.exports = {
       displayName: 'components',
       preset: 'jest-expo/web',
       testMatch: ['<rootDir>/tests/components/**/*.test.ts?(x)'],
-      moduleNameMapper: { ...d3, ...aliases },
+      // The preset's own react-native → react-native-web mapping, kept beside ours.
+      moduleNameMapper: { '^react-native$': 'react-native-web', ...d3, ...aliases },
+      // Expo's Babel preset as Metro runs it for the web (there is no babel.config.js).
+      transform: {
+        '\\.[jt]sx?$': ['babel-jest', { presets: ['babel-preset-expo'], caller: { name: 'metro', bundler: 'metro', platform: 'web' } }],
+      },
     },
   ],
 };

@@ -2,7 +2,7 @@
 import { buildWebIfChanged } from './lib/web-build';
 
 try {
-  if (!buildWebIfChanged()) console.log('Web app is up to date.');
+  if (!buildWebIfChanged(console.log, undefined, process.argv.includes('--force'))) console.log('Web app is up to date.');
 } catch (err) {
   console.error(err instanceof Error ? err.message : err);
   process.exit(1);

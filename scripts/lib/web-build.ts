@@ -32,11 +32,11 @@ export function webSourceHash(root = ROOT): string {
 }
 
 /** Runs `expo export --platform web` when needed; returns whether it built. */
-export function buildWebIfChanged(log: (line: string) => void = console.log, root = ROOT): boolean {
+export function buildWebIfChanged(log: (line: string) => void = console.log, root = ROOT, force = false): boolean {
   const dist = path.join(root, 'dist');
   const stampFile = path.join(dist, '.source-hash');
   const hash = webSourceHash(root);
-  if (fs.existsSync(stampFile) && fs.readFileSync(stampFile, 'utf8') === hash && fs.existsSync(path.join(dist, 'index.html'))) {
+  if (!force && fs.existsSync(stampFile) && fs.readFileSync(stampFile, 'utf8') === hash && fs.existsSync(path.join(dist, 'index.html'))) {
     return false;
   }
   log('Building the web app (expo export --platform web)…');

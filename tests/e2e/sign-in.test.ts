@@ -25,7 +25,7 @@ describe('sign-in in the browser', () => {
     await page.goto(served.url);
     await page.getByLabel('E-mail').fill('oskar@larchmere.example');
     await page.getByLabel('Password').fill('ovalyard-demo');
-    await page.getByText('Sign in', { exact: true }).click();
+    await page.getByRole('button', { name: 'Sign in' }).click();
     await page.getByText('Nell Tarrant').first().waitFor({ timeout: 30_000 });
     expect(await page.getByText('Amos Keverne').count()).toBeGreaterThan(0);
     await page.close();
@@ -36,8 +36,9 @@ describe('sign-in in the browser', () => {
     await page.goto(served.url);
     await page.getByLabel('E-mail').fill('oskar@larchmere.example');
     await page.getByLabel('Password').fill('not the password');
-    await page.getByText('Sign in', { exact: true }).click();
-    await page.getByText('That e-mail and password do not match an account.').waitFor({ timeout: 15_000 });
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByText('That e-mail and password do not match. Check both and try again.').waitFor({ timeout: 15_000 });
+    expect(await page.getByLabel('Password').count()).toBe(1);
     await page.close();
   });
 });

@@ -1,0 +1,108 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import type { Fitting, FittingBody } from '@/server/schemas';
+import { errorMessage, fieldErrorsFromApi } from '../api-client';
+import type { FieldErrors } from '../forms';
+import { AppText } from '../ui/app-text';
+import { Button } from '../ui/button';
+import { ChoiceField } from '../ui/choice-field';
+import { FormRow } from '../ui/form-row';
+import { Notice } from '../ui/notice';
+import { SwitchField } from '../ui/switch-field';
+import { TextField } from '../ui/text-field';
+import { space } from '../theme';
+import { fittingFormText, parseFittingForm, type FittingFormText } from './fitting-form-values';
+import { PlayerPicker } from './player-picker';
+
+type FittingFormProps = {
+  fitting?: Fitting;
+  /** Preselected player of a new fitting (from a player's page). */
+  playerId?: string;
+  submitTitle: string;
+  busy: boolean;
+  error: unknown;
+  onSubmit: (body: FittingBody) => void;
+  onCancel: () => void;
+};
+
+const VENUES = [
+  { value: 'indoor', label: 'Indoor bay' },
+  { value: 'outdoor', label: 'Outdoor range' },
+] as const;
+
+/** A fitting's player, date, venue and conditions; checked with the shared schema before sending. */
+export function FittingForm({ fitting, playerId, submitTitle, busy, error, onSubmit, onCancel }: FittingFormProps) {
+  const [text, setText] = useState<FittingFormText>(() => fittingFormText(fitting, { playerId }));
+  const [errors, setErrors] = useState<FieldErrors>({});
+  const set = <K extends keyof FittingFormText>(key: K) => (value: FittingFormText[K]) => setText((t) => ({ ...t, [key]: value }));
+  const shown = { ...fieldErrorsFromApi(error), ...errors };
+
+  const submit = () => {
+    const result = parseFittingForm(text);
+    if (!result.ok) {
+      setErrors(result.errors);
+      return;
+    }
+    setErrors({});
+    onSubmit(result.body);
+  };
+
+  return (
+    <View style={styles.form}>
+      {error ? <Notice tone="danger">{errorMessage(error)}</Notice> : null}
+      {Object.keys(errors).length > 0 ? <Notice tone="danger">Some fields need a look; see the notes under them.</Notice> : null}
+      {fitting ? (
+        <View style={styles.fixed}>
+          <AppText variant="label">Player</AppText>
+          <AppText variant="bodyStrong">{fitting.playerName}</AppText>
+        </View>
+      ) : (
+        <PlayerPicker playerId={text.playerId} onChange={set('playerId')} error={shown.playerId} />
+      )}
+      <FormRow>
+        <TextField label="Date" value={text.date} onChangeText={set('date')} error={shown.date} placeholder="YYYY-MM-DD" hint="As YYYY-MM-DD" />
+        <TextField label="Ball" value={text.ball} onChangeText={set('ball')} error={shown.ball} placeholder="Model used in the bay" />
+      </FormRow>
+      <ChoiceField label="Venue" value={text.venue} options={VENUES} onChange={set('venue')} />
+      <AppText variant="label" tone="muted">
+        Conditions (optional; used later to normalise carry)
+      </AppText>
+      <FormRow>
+        <TextField
+          label="Temperature"
+          suffix="°C"
+          value={text.temperatureC}
+          onChangeText={set('temperatureC')}
+          error={shown.temperatureC}
+          inputMode="decimal"
+        />
+        <TextField label="Altitude" suffix="m" value={text.altitudeM} onChangeText={set('altitudeM')} error={shown.altitudeM} inputMode="decimal" />
+        <TextField
+          label="Humidity"
+          suffix="%"
+          value={text.humidityPct}
+          onChangeText={set('humidityPct')}
+          error={shown.humidityPct}
+          inputMode="decimal"
+        />
+      </FormRow>
+      <TextField label="Notes" value={text.notes} onChangeText={set('notes')} error={shown.notes} multiline numberOfLines={4} />
+      <SwitchField
+        label="Remote fitting"
+        hint="The player may upload their own bay files."
+        value={text.remote}
+        onChange={set('remote')}
+      />
+      <View style={styles.actions}>
+        <Button title={submitTitle} onPress={submit} busy={busy} />
+        <Button title="Cancel" variant="quiet" onPress={onCancel} disabled={busy} />
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: space.lg },
+  fixed: { gap: space.xs },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
+});

@@ -1,0 +1,35 @@
+import type { Role } from '@/server/schemas';
+
+/**
+ * A handicap index as golfers write it: a negative stored value is a "plus" handicap (+2.0).
+ * Common practice, no source.
+ */
+export function formatHandicap(handicap: number | null): string {
+  if (handicap === null) return 'No handicap';
+  if (handicap < 0) return `+${Math.abs(handicap).toFixed(1)}`;
+  return handicap.toFixed(1);
+}
+
+export const formatHandedness = (h: 'right' | 'left'): string => (h === 'right' ? 'Right-handed' : 'Left-handed');
+
+export const formatVenue = (v: 'indoor' | 'outdoor'): string => (v === 'indoor' ? 'Indoor bay' : 'Outdoor range');
+
+export const formatRole = (role: Role): string => ({ owner: 'Owner', fitter: 'Fitter', player: 'Player' })[role];
+
+const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
+
+/** "2025-04-03" → "3 Apr 2025" (the calendar date as stored; no time zone shift). */
+export function formatDate(isoDate: string): string {
+  const m = /^(\d{4})-(\d{2})-(\d{2})/.exec(isoDate);
+  if (!m) return isoDate;
+  const month = MONTHS[Number(m[2]) - 1];
+  return month ? `${Number(m[3])} ${month} ${m[1]}` : isoDate;
+}
+
+/** Today's calendar date in the browser's time zone, as YYYY-MM-DD. */
+export function todayIsoDate(now: Date = new Date()): string {
+  const pad = (n: number) => String(n).padStart(2, '0');
+  return `${now.getFullYear()}-${pad(now.getMonth() + 1)}-${pad(now.getDate())}`;
+}
+
+export const plural = (n: number, one: string, many = `${one}s`): string => `${n} ${n === 1 ? one : many}`;

@@ -1,0 +1,77 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { playerAccountBodySchema, type Player } from '@/server/schemas';
+import { ApiError, errorMessage, fieldErrorsFromApi } from '../api-client';
+import { fieldErrorsFromZod, type FieldErrors } from '../forms';
+import { useGivePlayerAccountMutation } from '../queries/players';
+import { AppText } from '../ui/app-text';
+import { Button } from '../ui/button';
+import { Notice } from '../ui/notice';
+import { TextField } from '../ui/text-field';
+import { space } from '../theme';
+
+type PlayerAccountFormProps = { player: Player; onDone: () => void; onCancel: () => void };
+
+function bannerFor(error: unknown): string {
+  if (error instanceof ApiError && error.code === 'EMAIL_TAKEN') return 'That e-mail address already has a sign-in. Use another.';
+  if (error instanceof ApiError && error.code === 'HAS_ACCOUNT') return 'This player already has a sign-in.';
+  return errorMessage(error);
+}
+
+/** Gives a player their own sign-in: an e-mail and a first password to hand over. */
+export function PlayerAccountForm({ player, onDone, onCancel }: PlayerAccountFormProps) {
+  const [email, setEmail] = useState(player.email ?? '');
+  const [password, setPassword] = useState('');
+  const [errors, setErrors] = useState<FieldErrors>({});
+  const give = useGivePlayerAccountMutation(player.id);
+  const shown = { ...fieldErrorsFromApi(give.error), ...errors };
+
+  const submit = () => {
+    const parsed = playerAccountBodySchema.safeParse({ email, password });
+    if (!parsed.success) {
+      setErrors(fieldErrorsFromZod(parsed.error));
+      return;
+    }
+    setErrors({});
+    // mutateAsync, not mutate's callbacks: the saved player (hasAccount) may unmount this form
+    // before per-call callbacks would run. A failure shows through give.error.
+    give.mutateAsync(parsed.data).then(onDone, () => undefined);
+  };
+
+  return (
+    <View style={styles.form}>
+      <AppText tone="muted">
+        {player.name} will sign in with this e-mail and password and see only their own profile and fittings. Hand the
+        password over in person; they can keep using it.
+      </AppText>
+      {give.error ? <Notice tone="danger">{bannerFor(give.error)}</Notice> : null}
+      <TextField
+        label="E-mail"
+        value={email}
+        onChangeText={setEmail}
+        error={shown.email}
+        autoCapitalize="none"
+        inputMode="email"
+        keyboardType="email-address"
+      />
+      <TextField
+        label="First password"
+        value={password}
+        onChangeText={setPassword}
+        error={shown.password}
+        hint="At least 10 characters."
+        secureTextEntry
+        autoComplete="new-password"
+      />
+      <View style={styles.actions}>
+        <Button title="Give sign-in" onPress={submit} busy={give.isPending} />
+        <Button title="Cancel" variant="quiet" onPress={onCancel} disabled={give.isPending} />
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: space.lg },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
+});

@@ -1,0 +1,93 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import type { Player, PlayerBody } from '@/server/schemas';
+import { errorMessage, fieldErrorsFromApi } from '../api-client';
+import type { FieldErrors } from '../forms';
+import { Button } from '../ui/button';
+import { ChoiceField } from '../ui/choice-field';
+import { FormRow } from '../ui/form-row';
+import { Notice } from '../ui/notice';
+import { TextField } from '../ui/text-field';
+import { space } from '../theme';
+import { parsePlayerForm, playerFormText, type PlayerFormText } from './player-form-values';
+
+type PlayerFormProps = {
+  player?: Player;
+  submitTitle: string;
+  busy: boolean;
+  /** The failed save, if any (its field errors show inline). */
+  error: unknown;
+  onSubmit: (body: PlayerBody) => void;
+  onCancel: () => void;
+};
+
+const HANDEDNESS = [
+  { value: 'right', label: 'Right-handed' },
+  { value: 'left', label: 'Left-handed' },
+] as const;
+
+/** A player's profile: checked with the shared schema before it is sent. Lengths in cm. */
+export function PlayerForm({ player, submitTitle, busy, error, onSubmit, onCancel }: PlayerFormProps) {
+  const [text, setText] = useState<PlayerFormText>(() => playerFormText(player));
+  const [errors, setErrors] = useState<FieldErrors>({});
+  const set = <K extends keyof PlayerFormText>(key: K) => (value: PlayerFormText[K]) => setText((t) => ({ ...t, [key]: value }));
+  const shown = { ...fieldErrorsFromApi(error), ...errors };
+
+  const submit = () => {
+    const result = parsePlayerForm(text);
+    if (!result.ok) {
+      setErrors(result.errors);
+      return;
+    }
+    setErrors({});
+    onSubmit(result.body);
+  };
+
+  return (
+    <View style={styles.form}>
+      {error ? <Notice tone="danger">{errorMessage(error)}</Notice> : null}
+      {Object.keys(errors).length > 0 ? <Notice tone="danger">Some fields need a look; see the notes under them.</Notice> : null}
+      <TextField label="Name" value={text.name} onChangeText={set('name')} error={shown.name} autoComplete="name" />
+      <TextField
+        label="E-mail (optional)"
+        value={text.email}
+        onChangeText={set('email')}
+        error={shown.email}
+        autoCapitalize="none"
+        inputMode="email"
+        keyboardType="email-address"
+      />
+      <ChoiceField label="Plays" value={text.handedness} options={HANDEDNESS} onChange={set('handedness')} />
+      <FormRow>
+        <TextField label="Height" suffix="cm" value={text.heightCm} onChangeText={set('heightCm')} error={shown.heightCm} inputMode="decimal" />
+        <TextField
+          label="Wrist to floor"
+          suffix="cm"
+          value={text.wristToFloorCm}
+          onChangeText={set('wristToFloorCm')}
+          error={shown.wristToFloorCm}
+          inputMode="decimal"
+        />
+        <TextField
+          label="Handicap index"
+          value={text.handicap}
+          onChangeText={set('handicap')}
+          error={shown.handicap}
+          hint="A plus handicap with “+”, e.g. +1.5"
+          inputMode="decimal"
+        />
+      </FormRow>
+      <TextField label="Usual miss" value={text.usualMiss} onChangeText={set('usualMiss')} error={shown.usualMiss} />
+      <TextField label="Goals" value={text.goals} onChangeText={set('goals')} error={shown.goals} multiline numberOfLines={4} />
+      <View style={styles.actions}>
+        <Button title={submitTitle} onPress={submit} busy={busy} />
+        <Button title="Cancel" variant="quiet" onPress={onCancel} disabled={busy} />
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: space.lg },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
+});

@@ -1,0 +1,74 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { teamMemberBodySchema } from '@/server/schemas';
+import { ApiError, errorMessage, fieldErrorsFromApi } from '../api-client';
+import { fieldErrorsFromZod, type FieldErrors } from '../forms';
+import { useAddFitterMutation } from '../queries/team';
+import { AppText } from '../ui/app-text';
+import { Button } from '../ui/button';
+import { Notice } from '../ui/notice';
+import { TextField } from '../ui/text-field';
+import { space } from '../theme';
+
+type TeamMemberFormProps = { onDone: () => void; onCancel: () => void };
+
+/** Adds a fitter to the shop with a first password the owner hands over. */
+export function TeamMemberForm({ onDone, onCancel }: TeamMemberFormProps) {
+  const [text, setText] = useState({ name: '', email: '', password: '' });
+  const [errors, setErrors] = useState<FieldErrors>({});
+  const add = useAddFitterMutation();
+  const shown = { ...fieldErrorsFromApi(add.error), ...errors };
+  const set = (key: keyof typeof text) => (value: string) => setText((t) => ({ ...t, [key]: value }));
+
+  const submit = () => {
+    const parsed = teamMemberBodySchema.safeParse(text);
+    if (!parsed.success) {
+      setErrors(fieldErrorsFromZod(parsed.error));
+      return;
+    }
+    setErrors({});
+    add.mutate(parsed.data, { onSuccess: onDone });
+  };
+
+  const banner =
+    add.error instanceof ApiError && add.error.code === 'EMAIL_TAKEN'
+      ? 'That e-mail address already has a sign-in. Use another.'
+      : add.error
+        ? errorMessage(add.error)
+        : null;
+
+  return (
+    <View style={styles.form}>
+      <AppText tone="muted">The new fitter signs in with this e-mail and first password.</AppText>
+      {banner ? <Notice tone="danger">{banner}</Notice> : null}
+      <TextField label="Name" value={text.name} onChangeText={set('name')} error={shown.name} />
+      <TextField
+        label="E-mail"
+        value={text.email}
+        onChangeText={set('email')}
+        error={shown.email}
+        autoCapitalize="none"
+        inputMode="email"
+        keyboardType="email-address"
+      />
+      <TextField
+        label="First password"
+        value={text.password}
+        onChangeText={set('password')}
+        error={shown.password}
+        hint="At least 10 characters."
+        secureTextEntry
+        autoComplete="new-password"
+      />
+      <View style={styles.actions}>
+        <Button title="Add fitter" onPress={submit} busy={add.isPending} />
+        <Button title="Cancel" variant="quiet" onPress={onCancel} disabled={add.isPending} />
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: space.lg },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
+});

@@ -1,0 +1,120 @@
+/**
+ * Screenshots of the web app for a look by eye: signs in as each demo role through the sign-in
+ * screen and visits the main pages at phone (390 × 844) and wide (1280 × 800) sizes.
+ * Needs a running server (npm start). Images go to .scratch/screenshots/ (ignored).
+ * Run: BASE_URL=http://127.0.0.1:8090 node --import tsx scripts/screenshots.ts
+ */
+import { execSync } from 'node:child_process';
+import fs from 'node:fs';
+import path from 'node:path';
+import { chromium, type Page } from 'playwright-core';
+
+const BASE = process.env.BASE_URL ?? 'http://127.0.0.1:8080';
+const OUT = path.resolve(__dirname, '../.scratch/screenshots');
+const PASSWORD = 'ovalyard-demo'; // demo data (fixtures/demo/scenario.json)
+
+const SIZES = [
+  { name: 'phone', width: 390, height: 844 },
+  { name: 'wide', width: 1280, height: 800 },
+] as const;
+
+async function signIn(page: Page, email: string): Promise<void> {
+  await page.goto(`${BASE}/sign-in`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(PASSWORD);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
+}
+
+async function shot(page: Page, name: string): Promise<void> {
+  await page.waitForLoadState('networkidle');
+  await page.waitForTimeout(300);
+  await page.screenshot({ path: path.join(OUT, `${name}.png`) });
+  console.log('  ', name);
+}
+
+async function main(): Promise<void> {
+  fs.mkdirSync(OUT, { recursive: true });
+  const browser = await chromium.launch({
+    executablePath: execSync('command -v chromium', { shell: '/bin/bash' }).toString().trim(),
+    args: [
+      '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking',
+      '--disable-component-update', '--disable-sync', '--disable-dev-shm-usage',
+    ],
+  });
+  try {
+    for (const size of SIZES) {
+      const s = size.name;
+      // signed out, and a failed sign-in
+      let context = await browser.newContext({ viewport: size });
+      let page = await context.newPage();
+      await page.goto(`${BASE}/sign-in`);
+      await shot(page, `${s}-01-sign-in`);
+      await page.getByLabel('E-mail').fill('oskar@larchmere.example');
+      await page.getByLabel('Password').fill('wrong-password');
+      await page.getByRole('button', { name: 'Sign in' }).click();
+      await page.getByText('do not match').waitFor();
+      await shot(page, `${s}-02-sign-in-error`);
+      await context.close();
+
+      // fitter
+      context = await browser.newContext({ viewport: size });
+      page = await context.newPage();
+      await signIn(page, 'oskar@larchmere.example');
+      await shot(page, `${s}-10-players`);
+      await page.getByLabel('Search players').fill('zzz');
+      await page.getByText('No player matches').waitFor();
+      await shot(page, `${s}-11-players-no-match`);
+      await page.getByLabel('Search players').fill('');
+      await page.getByText('Nell Tarrant').first().click();
+      await page.waitForURL(/\/players\/[0-9a-f-]+$/);
+      await shot(page, `${s}-12-player`);
+      await page.getByRole('button', { name: 'Edit' }).click();
+      await shot(page, `${s}-13-player-edit`);
+      await page.getByLabel('Height').fill('abc');
+      await page.getByLabel('Name').fill('');
+      await page.getByRole('button', { name: 'Save' }).click();
+      await shot(page, `${s}-14-player-edit-errors`);
+      await page.goto(`${BASE}/players/new`);
+      await shot(page, `${s}-15-player-new`);
+      await page.goto(`${BASE}/fittings`);
+      await shot(page, `${s}-20-fittings`);
+      await page.getByRole('link').filter({ hasText: 'Nell Tarrant' }).first().click();
+      await page.waitForURL(/\/fittings\/[0-9a-f-]+$/);
+      await shot(page, `${s}-21-fitting`);
+      await page.getByRole('button', { name: 'Edit' }).click();
+      await shot(page, `${s}-22-fitting-edit`);
+      await page.goto(`${BASE}/fittings/new`);
+      await shot(page, `${s}-23-fitting-new`);
+      await page.goto(`${BASE}/account`);
+      await shot(page, `${s}-30-account-fitter`);
+      await context.close();
+
+      // owner
+      context = await browser.newContext({ viewport: size });
+      page = await context.newPage();
+      await signIn(page, 'hedda@larchmere.example');
+      await page.goto(`${BASE}/team`);
+      await shot(page, `${s}-40-team`);
+      await page.goto(`${BASE}/team/new`);
+      await shot(page, `${s}-41-team-new`);
+      await context.close();
+
+      // player
+      context = await browser.newContext({ viewport: size });
+      page = await context.newPage();
+      await signIn(page, 'nell.tarrant@example.net');
+      await shot(page, `${s}-50-my-fittings`);
+      await page.goto(`${BASE}/account`);
+      await shot(page, `${s}-51-account-player`);
+      await context.close();
+    }
+  } finally {
+    await browser.close();
+  }
+}
+
+main().catch((error) => {
+  console.error(error);
+  process.exit(1);
+});

@@ -1,0 +1,76 @@
+import { QueryClientProvider } from '@tanstack/react-query';
+import { fireEvent, render, screen, waitFor } from '@testing-library/react-native';
+import { SignInForm } from '@/components/session/sign-in-form';
+import { createQueryClient } from '@/components/queries/query-client';
+
+function renderForm(onSignedIn = jest.fn()) {
+  const client = createQueryClient();
+  render(
+    <QueryClientProvider client={client}>
+      <SignInForm onSignedIn={onSignedIn} />
+    </QueryClientProvider>,
+  );
+  return { onSignedIn, client };
+}
+
+/**
+ * All text of the rendered tree. With react-native-web (the web preset) text renders as DOM
+ * host elements, which the Text-based queries of @testing-library/react-native do not see.
+ */
+function pageText(): string {
+  const walk = (node: unknown): string => {
+    if (node === null || node === undefined) return '';
+    if (typeof node === 'string') return node;
+    if (Array.isArray(node)) return node.map(walk).join(' ');
+    const children = (node as { children?: unknown }).children;
+    return children ? walk(children) : '';
+  };
+  return walk(screen.toJSON());
+}
+
+function answer(status: number, body: unknown): Response {
+  return { ok: status >= 200 && status < 300, status, text: async () => JSON.stringify(body) } as Response;
+}
+
+const fetchMock = jest.fn();
+beforeEach(() => {
+  fetchMock.mockReset();
+  global.fetch = fetchMock as unknown as typeof fetch;
+});
+
+describe('SignInForm', () => {
+  it('SignInForm, wrong password, shows the refusal in the page', async () => {
+    fetchMock.mockResolvedValue(answer(401, { error: { code: 'BAD_CREDENTIALS', message: 'E-mail or password is wrong.' } }));
+    const { onSignedIn } = renderForm();
+    fireEvent.changeText(screen.getByLabelText('E-mail'), 'Someone@Example.test');
+    fireEvent.changeText(screen.getByLabelText('Password'), 'not-it');
+    fireEvent.press(screen.getByLabelText('Sign in'));
+    await waitFor(() => expect(pageText()).toMatch(/do not match/));
+    expect(onSignedIn).not.toHaveBeenCalled();
+    const [url, init] = fetchMock.mock.calls[0] as [string, RequestInit];
+    expect(url).toBe('/api/auth/sign-in');
+    expect(init.credentials).toBe('include');
+    expect((init.headers as Record<string, string>)['x-ovalyard-request']).toBe('1');
+    expect(JSON.parse(init.body as string)).toEqual({ email: 'someone@example.test', password: 'not-it' });
+  });
+
+  it('SignInForm, e-mail without an @, shows a field error and sends nothing', () => {
+    renderForm();
+    fireEvent.changeText(screen.getByLabelText('E-mail'), 'nobody');
+    fireEvent.changeText(screen.getByLabelText('Password'), 'x');
+    fireEvent.press(screen.getByLabelText('Sign in'));
+    expect(pageText()).toContain('Enter an e-mail address.');
+    expect(fetchMock).not.toHaveBeenCalled();
+  });
+
+  it('SignInForm, right password, records the user and calls onSignedIn', async () => {
+    const user = { id: 'u1', email: 'a@example.test', name: 'A', role: 'fitter', shop: { id: 's', name: 'S' }, playerId: null, units: 'metric' };
+    fetchMock.mockResolvedValue(answer(200, { user }));
+    const { onSignedIn, client } = renderForm();
+    fireEvent.changeText(screen.getByLabelText('E-mail'), 'a@example.test');
+    fireEvent.changeText(screen.getByLabelText('Password'), 'secret');
+    fireEvent.press(screen.getByLabelText('Sign in'));
+    await waitFor(() => expect(onSignedIn).toHaveBeenCalledTimes(1));
+    expect(client.getQueryData(['me'])).toEqual(user);
+  });
+});
