@@ -35,7 +35,7 @@ function gatherKept(column: Float64Array, kept: Uint8Array, scratch: Float64Arra
  */
 export function analyseGroup(
   columns: ShotColumns,
-  options: { level: number; includeStrays: boolean; decisions: Record<number, StrayDecision> },
+  options: { level: number; includeStrays: boolean; decisions: Record<number, StrayDecision>; formatDistance?: (metres: number) => string },
   scratch: Float64Array = new Float64Array(columns.rows.length * 2),
 ): AnalysedGroup {
   const n = columns.rows.length;
@@ -62,7 +62,7 @@ export function analyseGroup(
   for (const stray of found) {
     const decision = options.decisions[stray.row];
     const note = decision === 'keep' ? ' (kept by the fitter)' : decision === 'drop' ? ' (dropped by the fitter)' : '';
-    strays.push({ row: stray.row, reason: describeStray(stray) + note });
+    strays.push({ row: stray.row, reason: describeStray(stray, options.formatDistance) + note });
   }
   strays.sort((a, b) => a.row - b.row);
 

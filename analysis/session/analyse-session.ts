@@ -43,7 +43,7 @@ function findGroup(groups: AnalysedGroup[], ref: GroupRef): AnalysedGroup {
 export function analyseSession(shots: readonly Shot[], options: SessionOptions = {}): SessionAnalysis {
   const level = options.level ?? 0.95;
   if (!(level > 0 && level < 1)) throw new RangeError('analyseSession: level must lie in (0, 1)');
-  const settings = { level, includeStrays: options.includeStrays ?? false, decisions: options.decisions ?? {} };
+  const settings = { level, includeStrays: options.includeStrays ?? false, decisions: options.decisions ?? {}, formatDistance: options.formatDistance };
   const columns = shotColumns(shots);
   let largest = 0;
   for (const c of columns) largest = Math.max(largest, c.rows.length);

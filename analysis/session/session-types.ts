@@ -23,6 +23,8 @@ export interface SessionOptions {
   compare?: [GroupRef, GroupRef];
   /** Loft per group, keyed `${club}|${build ?? ''}`, for the ladder's loft steps. */
   loftByGroup?: Record<string, number>;
+  /** Writes distances in stray reasons (default: metres, "148 m"). */
+  formatDistance?: (metres: number) => string;
   /** Per club, the build the ladder uses; clubs not listed pool all their builds. */
   chosenBuild?: Record<string, string | null>;
 }

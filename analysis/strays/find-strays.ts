@@ -1,5 +1,6 @@
 import { MODIFIED_Z_LIMIT, modifiedZScores } from './modified-z-score';
-import { GROUND_DISTANCE_LIMIT, robustGroundDistances } from './robust-ground-distance';
+import { predictionScale2 } from '@/analysis/ovals';
+import { GROUND_DISTANCE_LIMIT, GROUND_STRAY_LEVEL, robustGroundDistances } from './robust-ground-distance';
 
 /** Which rule flagged a shot. */
 export type StrayRule = 'carry' | 'smashFactor' | 'ground';
@@ -52,10 +53,23 @@ function countFinitePairs(x: ArrayLike<number>, y: ArrayLike<number>): number {
 }
 
 /**
+ * The robust-distance limit for a group of n shots: the 99.9% prediction region of the next
+ * shot, sqrt(k²) with Hotelling's k² = 2(n−1)(n+1)/(n(n−2))·F(2, n−2; 0.999), which allows for
+ * the centre and spread being estimated from few shots and falls to sqrt(χ²₂(0.999)) ≈ 3.72 as n
+ * grows. With the bare χ² limit, groups of 8–12 shots lost a third of their good shots to the
+ * ground rule (MAD scales from so few shots are noisy). O(1).
+ * @example groundDistanceLimit(10) // => 6.77
+ */
+export function groundDistanceLimit(n: number): number {
+  if (n < 3) return Infinity;
+  return Math.max(GROUND_DISTANCE_LIMIT, Math.sqrt(predictionScale2(n, GROUND_STRAY_LEVEL)));
+}
+
+/**
  * Strays of one group of shots (one club and build) by three robust rules:
  * carry and smash factor each by the modified z-score within the group (|M| > 3.5; Iglewicz &
  * Hoaglin 1993), and the landing spot by its robust distance from the group's pattern (median
- * centre, MAD scales, Gnanadesikan–Kettenring correlation; beyond sqrt(χ²₂(0.999)) ≈ 3.72).
+ * centre, MAD scales, Gnanadesikan–Kettenring correlation) beyond `groundDistanceLimit(n)`.
  * The one-field rules need 3 values, the ground rule 5 shots. Only statistics of the whole group
  * are used, so the result does not depend on the order of the shots; it is sorted by row.
  * O(n) expected.
@@ -82,13 +96,14 @@ export function findStrays(input: StrayInput): StrayShot[] {
   }
   if (input.offlineM && input.carryM && countFinitePairs(input.offlineM, input.carryM) >= MIN_SHOTS_FOR_GROUND) {
     const ground = robustGroundDistances(input.offlineM, input.carryM);
+    const limit = groundDistanceLimit(countFinitePairs(input.offlineM, input.carryM));
     for (let i = 0; i < n; i++) {
       const d = ground.distances[i];
-      if (d > GROUND_DISTANCE_LIMIT) {
+      if (d > limit) {
         add(i, {
           rule: 'ground',
           distance: d,
-          limit: GROUND_DISTANCE_LIMIT,
+          limit,
           offlineFromCenterM: input.offlineM[i] - ground.centerOffline,
           carryFromCenterM: input.carryM[i] - ground.centerCarry,
         });

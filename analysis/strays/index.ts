@@ -2,7 +2,7 @@ export { modifiedZScores, MODIFIED_Z_LIMIT } from './modified-z-score';
 export type { ModifiedZScores } from './modified-z-score';
 export { robustGroundDistances, GROUND_DISTANCE_LIMIT, GROUND_STRAY_LEVEL } from './robust-ground-distance';
 export type { RobustGroundDistances } from './robust-ground-distance';
-export { findStrays, MIN_SHOTS_FOR_SCORE, MIN_SHOTS_FOR_GROUND } from './find-strays';
+export { findStrays, groundDistanceLimit, MIN_SHOTS_FOR_SCORE, MIN_SHOTS_FOR_GROUND } from './find-strays';
 export type { StrayFlag, StrayRule, StrayShot, StrayInput } from './find-strays';
 export { describeStray, describeStrayFlag, formatMetres } from './describe-stray';
 export type { DistanceFormatter } from './describe-stray';

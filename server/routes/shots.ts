@@ -18,7 +18,7 @@ export function shotsRouter(sequelize: Sequelize): Router {
     const q = analysisQuerySchema.parse(req.query);
     const hasTo = q.toTemperatureC !== undefined || q.toAltitudeM !== undefined || q.toHumidityPct !== undefined;
     const to = hasTo ? { temperatureC: q.toTemperatureC, altitudeM: q.toAltitudeM, humidityPct: q.toHumidityPct } : undefined;
-    res.json(await analyseFitting(sequelize, actorOf(res), id, { level: q.level, includeStrays: q.all, compare: q.a && q.b ? [q.a, q.b] : undefined, to }));
+    res.json(await analyseFitting(sequelize, actorOf(res), id, { units: actorOf(res).units, level: q.level, includeStrays: q.all, compare: q.a && q.b ? [q.a, q.b] : undefined, to }));
   });
   router.patch('/shots/:shotId', async (req, res) => {
     const { shotId } = z.object({ shotId: z.coerce.number().int().positive() }).parse(req.params);

@@ -1,4 +1,32 @@
 import { z } from 'zod';
+import type { AirConditions } from '../../analysis/flight/air-conditions';
+import type { SessionAnalysis } from '../../analysis/session/session-types';
+
+/** One shot as the dispersion plot needs it (canonical units). */
+export interface PlotShot {
+  id: number;
+  bayFileId: string;
+  /** Row in its bay file. */
+  row: number;
+  club: string;
+  build: string | null;
+  carry: number | null;
+  offline: number | null;
+  ballSpeed: number | null;
+  launchAngle: number | null;
+  spinRate: number | null;
+  decision: 'keep' | 'drop' | null;
+  /** Flagged by the stray rules (strays and decisions name shot ids here). */
+  stray: boolean;
+}
+
+/** GET /api/fittings/:id/analysis */
+export interface FittingAnalysis {
+  analysis: SessionAnalysis;
+  /** The fitting's measured air, and the conditions the figures were carried over to (if any). */
+  air: { measured: AirConditions; normalisedTo: AirConditions | null };
+  shots: PlotShot[];
+}
 
 /** "7I|Steel 105" → { club, build }; "7I|" or "7I" → build null. */
 const groupRef = z

@@ -87,7 +87,7 @@ export async function seedDemo(sequelize: Sequelize, now: Date, after?: DemoHook
     if (!f.bayFile) continue;
     const fitting = fittings.get(String(i))!;
     const fitter = await User.findOne({ where: { email: f.fitter } });
-    const actor = { id: fitter!.id, role: fitter!.role, shopId: fitter!.shopId, playerId: null };
+    const actor = { id: fitter!.id, role: fitter!.role, shopId: fitter!.shopId, playerId: null, units: fitter!.units };
     const file = { name: f.bayFile, buffer: fs.readFileSync(path.join(DEMO_DIR, f.bayFile)) };
     await commitBayFile(sequelize, actor, fitting.id, file, { builds: { mode: 'column' } }, { maxRows: 200_000 });
   }

@@ -8,6 +8,8 @@ export interface Actor {
   shopId: string;
   /** For a player user: their player profile. */
   playerId: string | null;
+  /** Display units of the user (stray reasons and other server-written text). */
+  units: 'imperial' | 'metric';
 }
 
 export const isStaff = (actor: Actor) => actor.role === 'owner' || actor.role === 'fitter';

@@ -6,9 +6,11 @@
 import type { Sequelize } from 'sequelize';
 import type { Shot } from '../../analysis/fields';
 import { normaliseShot, type AirConditions } from '../../analysis/flight';
+import { fromCanonical } from '../../analysis/units';
 import { analyseSession, type GroupRef, type SessionAnalysis } from '../../analysis/session';
 import { HttpError } from '../errors';
 import { Build } from '../models';
+import type { FittingAnalysis } from '../schemas';
 import type { Actor } from './actor';
 import { airOf } from './bay-files';
 import { findVisibleFitting } from './fittings';
@@ -18,27 +20,10 @@ export interface AnalysisQuery {
   level: number;
   includeStrays: boolean;
   compare?: [GroupRef, GroupRef];
+  /** Units of the distances written in stray reasons (the user's preference). */
+  units?: 'imperial' | 'metric';
   /** Carry the shots over to these conditions (the player's course) with the ball-flight model. */
   to?: AirConditions;
-}
-
-export interface PlotShot {
-  id: number;
-  bayFileId: string;
-  row: number;
-  club: string;
-  build: string | null;
-  carry: number | null;
-  offline: number | null;
-  decision: 'keep' | 'drop' | null;
-  stray: boolean;
-}
-
-export interface FittingAnalysis {
-  analysis: SessionAnalysis;
-  /** The fitting's measured air, and the conditions the figures were carried over to (if any). */
-  air: { measured: AirConditions; normalisedTo: AirConditions | null };
-  shots: PlotShot[];
 }
 
 export async function analyseFitting(sequelize: Sequelize, actor: Actor, fittingId: string, query: AnalysisQuery): Promise<FittingAnalysis> {
@@ -62,7 +47,9 @@ export async function analyseFitting(sequelize: Sequelize, actor: Actor, fitting
   });
   let analysis: SessionAnalysis;
   try {
-    analysis = analyseSession(shots, { level: query.level, includeStrays: query.includeStrays, decisions, compare: query.compare, loftByGroup });
+    const yards = query.units === 'imperial';
+    const formatDistance = (m: number) => (yards ? `${fromCanonical(m, 'yd', 'carry').toFixed(0)} yd` : `${m.toFixed(0)} m`);
+    analysis = analyseSession(shots, { level: query.level, includeStrays: query.includeStrays, decisions, compare: query.compare, loftByGroup, formatDistance });
   } catch (err) {
     if (err instanceof RangeError) throw new HttpError(400, 'BAD_ANALYSIS_REQUEST', err.message.replace(/^analyseSession: /, ''));
     throw err;
@@ -79,6 +66,9 @@ export async function analyseFitting(sequelize: Sequelize, actor: Actor, fitting
       build: s.build,
       carry: s.values.carry ?? null,
       offline: s.values.offline ?? null,
+      ballSpeed: s.values.ballSpeed ?? null,
+      launchAngle: s.values.launchAngle ?? null,
+      spinRate: s.values.spinRate ?? null,
       decision: s.decision,
       stray: strayIds.has(s.id),
     })),

@@ -29,7 +29,7 @@ export async function loadActor(userId: string, tokenVersion: number): Promise<A
     const player = await Player.findOne({ where: { userId: user.id }, attributes: ['id'] });
     playerId = player?.id ?? null;
   }
-  return { id: user.id, role: user.role, shopId: user.shopId, playerId };
+  return { id: user.id, role: user.role, shopId: user.shopId, playerId, units: user.units };
 }
 
 export async function describeMe(actor: Actor): Promise<Me> {
@@ -56,3 +56,4 @@ export async function signOutEverywhere(_sequelize: Sequelize | null, actor: Act
   const user = await User.findByPk(actor.id);
   if (user) await user.increment('tokenVersion');
 }
+

@@ -1,5 +1,6 @@
 import fc from 'fast-check';
 import { describeStray, findStrays } from '@/analysis/strays';
+import { groundDistanceLimit } from '@/analysis/strays';
 
 // Invented group: a player's 7-iron with one thin strike in row 5.
 const ROWS = [1, 2, 3, 4, 5, 6, 7, 8];
@@ -60,5 +61,19 @@ describe('findStrays', () => {
         expect(run(b)).toEqual(run(a));
       }),
     );
+  });
+});
+
+describe('groundDistanceLimit', () => {
+  it('groundDistanceLimit for 10 shots is the 99.9% Hotelling prediction scale', () => {
+    // Computed from the closed form F(2, m; q) = (m/2)·((1 − q)^(−2/m) − 1) (CHECKS.md) with m = 8:
+    // F = 4·(0.001^(−1/4) − 1) = 18.4937; k² = 2·9·11/(10·8)·F = 45.772; k = 6.7655.
+    expect(groundDistanceLimit(10)).toBeCloseTo(6.7655, 3);
+  });
+  it('groundDistanceLimit for a large group tends to sqrt(χ²₂(0.999))', () => {
+    expect(groundDistanceLimit(100000)).toBeCloseTo(Math.sqrt(-2 * Math.log(0.001)), 2);
+  });
+  it('groundDistanceLimit below 3 shots flags nothing', () => {
+    expect(groundDistanceLimit(2)).toBe(Infinity);
   });
 });

@@ -1,0 +1,85 @@
+import { useMemo, useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { clubInfo } from '@/analysis/clubs';
+import { describeOvalSpread, ovalSpread } from '@/analysis/ovals';
+import type { GroupAnalysis } from '@/analysis/session';
+import type { UnitSystem } from '@/analysis/units';
+import type { PlotShot } from '@/server/schemas';
+import { OvalPlot } from '../charts';
+import type { PlotShot as ChartShot } from '../charts';
+import { space } from '../theme';
+import { AppText } from '../ui/app-text';
+import { Card } from '../ui/card';
+import { SwitchField } from '../ui/switch-field';
+import { formatField } from './format-field';
+import { StrayList } from './stray-list';
+import { useWidth } from './use-width';
+
+type OvalSectionProps = {
+  club: string;
+  groups: readonly GroupAnalysis[];
+  shots: readonly PlotShot[];
+  units: UnitSystem;
+  canDecide: boolean;
+  onDecide: (shotId: number, decision: 'keep' | 'drop' | null) => void;
+  deciding: boolean;
+};
+
+/** One club's dispersion: the plot, the spread in words per build, the strays with keep/drop. */
+export function OvalSection({ club, groups, shots, units, canDecide, onDecide, deciding }: OvalSectionProps) {
+  const [width, onLayout] = useWidth();
+  const [showPrediction, setShowPrediction] = useState(false);
+  const [selected, setSelected] = useState<string | null>(null);
+  const clubGroups = groups.filter((g) => g.club === club);
+  const clubShots = useMemo(() => shots.filter((s) => s.club === club), [shots, club]);
+  const plotted: ChartShot[] = useMemo(
+    () => clubShots.filter((s) => s.carry !== null && s.offline !== null).map((s) => ({ ...s, id: String(s.id), carry: s.carry!, offline: s.offline! })),
+    [clubShots],
+  );
+  const distance = (m: number) => formatField(m, 'carry', units);
+  const selectedShot = clubShots.find((s) => String(s.id) === selected) ?? null;
+
+  return (
+    <Card>
+      <View onLayout={onLayout} style={styles.plot}>
+        {width > 0 && plotted.length > 0 ? (
+          <OvalPlot
+            club={club}
+            shots={plotted}
+            groups={clubGroups}
+            units={units}
+            widthPx={width}
+            showPrediction={showPrediction}
+            selectedShotId={selected}
+            onSelectShot={(id) => setSelected((old) => (old === id ? null : id))}
+          />
+        ) : (
+          <AppText tone="muted">{plotted.length === 0 ? 'These shots have no carry and offline to plot.' : ' '}</AppText>
+        )}
+      </View>
+      {selectedShot ? (
+        <AppText variant="caption">
+          {`Shot ${selectedShot.row} (${selectedShot.build ?? 'no build'}): carry ${formatField(selectedShot.carry, 'carry', units)}, ${selectedShot.offline === null ? '' : `${formatField(Math.abs(selectedShot.offline), 'offline', units)} ${selectedShot.offline < 0 ? 'left' : 'right'}`}`}
+        </AppText>
+      ) : null}
+      <SwitchField
+        label="Next-shot ovals"
+        hint="Dashed: where the next shot will land with the same chance, honest for few shots."
+        value={showPrediction}
+        onChange={setShowPrediction}
+      />
+      {clubGroups.map((g) => (
+        <AppText key={g.build ?? ''} variant="caption" tone="muted">
+          <AppText variant="caption" style={styles.strong}>{`${g.build ?? clubInfo(club)?.label ?? club}: `}</AppText>
+          {g.oval ? `${describeOvalSpread(ovalSpread(g.oval), distance)}.` : 'too few shots for an oval (3 or more with carry and offline).'}
+        </AppText>
+      ))}
+      <StrayList groups={clubGroups} shots={clubShots} canDecide={canDecide} onDecide={onDecide} deciding={deciding} />
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  plot: { width: '100%', minHeight: 120, gap: space.sm },
+  strong: { fontFamily: 'Inter_600SemiBold' },
+});
