@@ -61,7 +61,7 @@ export function HeadToHeadSection({ builds, a, b, onChange, headToHead, loading,
                   </View>
                   <AppText style={styles.num}>{d.p < 0.001 ? '< 0.001' : d.p.toFixed(3)}</AppText>
                   <AppText variant="caption" style={[styles.more, { color: clear ? colors.success : colors.textMuted }]}>
-                    {clear ? 'Clear difference' : more ? `About ${more} more shots each` : 'No difference seen'}
+                    {clear ? 'Clear difference' : more == null ? 'No difference seen' : more > 100 ? 'Too small to matter here' : `About ${more} more shots each`}
                   </AppText>
                 </View>
               );

@@ -11,7 +11,7 @@ import { space } from '../theme';
 import { AppText } from '../ui/app-text';
 import { Card } from '../ui/card';
 import { SwitchField } from '../ui/switch-field';
-import { formatField } from './format-field';
+import { formatField, formatSide } from './format-field';
 import { StrayList } from './stray-list';
 import { useWidth } from './use-width';
 
@@ -39,47 +39,60 @@ export function OvalSection({ club, groups, shots, units, canDecide, onDecide, d
   const distance = (m: number) => formatField(m, 'carry', units);
   const selectedShot = clubShots.find((s) => String(s.id) === selected) ?? null;
 
+  // On a wide screen the plot keeps a phone-like width and the words go beside it.
+  const wide = width >= WIDE_FROM_PX;
+  const plotWidth = wide ? Math.min(PLOT_MAX_WIDE_PX, Math.floor(width * 0.55)) : width;
   return (
     <Card>
-      <View onLayout={onLayout} style={styles.plot}>
-        {width > 0 && plotted.length > 0 ? (
-          <OvalPlot
-            club={club}
-            shots={plotted}
-            groups={clubGroups}
-            units={units}
-            widthPx={width}
-            showPrediction={showPrediction}
-            selectedShotId={selected}
-            onSelectShot={(id) => setSelected((old) => (old === id ? null : id))}
+      <View onLayout={onLayout} style={[styles.layout, wide && styles.wide]}>
+        <View style={[styles.plot, wide && { width: plotWidth }]}>
+          {width > 0 && plotted.length > 0 ? (
+            <OvalPlot
+              club={club}
+              shots={plotted}
+              groups={clubGroups}
+              units={units}
+              widthPx={plotWidth}
+              showPrediction={showPrediction}
+              selectedShotId={selected}
+              onSelectShot={(id) => setSelected((old) => (old === id ? null : id))}
+            />
+          ) : (
+            <AppText tone="muted">{plotted.length === 0 ? 'These shots have no carry and offline to plot.' : ' '}</AppText>
+          )}
+        </View>
+        <View style={styles.side}>
+          {selectedShot ? <AppText variant="caption">{describeShot(selectedShot, units)}</AppText> : null}
+          <SwitchField
+            label="Next-shot ovals"
+            hint="Dashed: where the next shot will land with the same chance, honest for few shots."
+            value={showPrediction}
+            onChange={setShowPrediction}
           />
-        ) : (
-          <AppText tone="muted">{plotted.length === 0 ? 'These shots have no carry and offline to plot.' : ' '}</AppText>
-        )}
+          {clubGroups.map((g) => (
+            <AppText key={g.build ?? ''} variant="caption" tone="muted">
+              <AppText variant="caption" style={styles.strong}>{`${g.build ?? clubInfo(club)?.label ?? club}: `}</AppText>
+              {g.oval ? `${describeOvalSpread(ovalSpread(g.oval), distance)}.` : 'too few shots for an oval (3 or more with carry and offline).'}
+            </AppText>
+          ))}
+          <StrayList groups={clubGroups} shots={clubShots} canDecide={canDecide} onDecide={onDecide} deciding={deciding} />
+        </View>
       </View>
-      {selectedShot ? (
-        <AppText variant="caption">
-          {`Shot ${selectedShot.row} (${selectedShot.build ?? 'no build'}): carry ${formatField(selectedShot.carry, 'carry', units)}, ${selectedShot.offline === null ? '' : `${formatField(Math.abs(selectedShot.offline), 'offline', units)} ${selectedShot.offline < 0 ? 'left' : 'right'}`}`}
-        </AppText>
-      ) : null}
-      <SwitchField
-        label="Next-shot ovals"
-        hint="Dashed: where the next shot will land with the same chance, honest for few shots."
-        value={showPrediction}
-        onChange={setShowPrediction}
-      />
-      {clubGroups.map((g) => (
-        <AppText key={g.build ?? ''} variant="caption" tone="muted">
-          <AppText variant="caption" style={styles.strong}>{`${g.build ?? clubInfo(club)?.label ?? club}: `}</AppText>
-          {g.oval ? `${describeOvalSpread(ovalSpread(g.oval), distance)}.` : 'too few shots for an oval (3 or more with carry and offline).'}
-        </AppText>
-      ))}
-      <StrayList groups={clubGroups} shots={clubShots} canDecide={canDecide} onDecide={onDecide} deciding={deciding} />
     </Card>
   );
 }
 
+function describeShot(s: PlotShot, units: UnitSystem): string {
+  return `Shot ${s.row} (${s.build ?? 'no build'}): carry ${formatField(s.carry, 'carry', units)}, ${formatSide(s.offline, 'offline', units)}.`;
+}
+
+const WIDE_FROM_PX = 700;
+const PLOT_MAX_WIDE_PX = 520;
+
 const styles = StyleSheet.create({
-  plot: { width: '100%', minHeight: 120, gap: space.sm },
+  layout: { gap: space.md },
+  wide: { flexDirection: 'row', alignItems: 'flex-start' },
+  plot: { minHeight: 120 },
+  side: { flex: 1, gap: space.sm, minWidth: 0 },
   strong: { fontFamily: 'Inter_600SemiBold' },
 });
