@@ -1,0 +1,93 @@
+/**
+ * A recipe: a saved column mapping for one dialect of bay file. JSON, validated by
+ * `recipeSchema`, applied instead of or on top of the automatic suggestion.
+ */
+import { z } from 'zod';
+import { SHOT_FIELDS, SIDE_FIELDS, type ShotField } from '@/analysis/fields';
+import { fieldDimension, findUnit } from '@/analysis/units';
+
+/**
+ * How a left/right value is written. '+' is right in Ovalyard.
+ * - suffix-LR: "12.3 L", "12.3R", "4.2 right"
+ * - prefix-LR: "L 12.3", "R4.5", "left 4.2"
+ * - signed-right-positive: "-12.3" is left, "12.3" is right
+ * - signed-left-positive: "12.3" is left, "-12.3" is right
+ */
+export type SideNotation = 'suffix-LR' | 'prefix-LR' | 'signed-right-positive' | 'signed-left-positive';
+
+export const SIDE_NOTATIONS = [
+  'suffix-LR',
+  'prefix-LR',
+  'signed-right-positive',
+  'signed-left-positive',
+] as const satisfies readonly SideNotation[];
+
+/** What a column holds: a canonical shot field, the club, (part of) the build, or nothing we keep. */
+export type ColumnTarget = ShotField | 'club' | 'build' | 'ignore';
+
+export const COLUMN_TARGETS = [...SHOT_FIELDS, 'club', 'build', 'ignore'] as const;
+
+export interface RecipeColumn {
+  field: ColumnTarget;
+  /** Unit of the column's numbers (any alias units.ts knows); for shot fields only. */
+  unit?: string;
+  /** Side notation; for left/right fields only. */
+  side?: SideNotation;
+}
+
+export type Recipe = {
+  delimiter?: ',' | ';' | '\t';
+  decimal?: '.' | ',';
+  /** 0-based line index of the header row. */
+  headerRow?: number;
+  /** Keyed by header as the file writes it (duplicates disambiguated: "Carry", "Carry (2)"). */
+  columns: Record<string, RecipeColumn>;
+};
+
+const columnSchema = z
+  .object({
+    field: z.enum(COLUMN_TARGETS),
+    unit: z.string().min(1).max(40).optional(),
+    side: z.enum(SIDE_NOTATIONS).optional(),
+  })
+  .strict()
+  .superRefine((column, ctx) => {
+    if (column.unit === undefined) return;
+    const info = findUnit(column.unit);
+    if (!info) {
+      ctx.addIssue({ code: 'custom', path: ['unit'], message: `Unknown unit "${column.unit}"`, params: { importCode: 'UNKNOWN_UNIT' } });
+      return;
+    }
+    if (column.field === 'club' || column.field === 'build' || column.field === 'ignore') return;
+    const dimension = fieldDimension(column.field);
+    if (info.dimension !== dimension) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['unit'],
+        message: `Unit "${column.unit}" is a ${info.dimension} unit; ${column.field} needs a ${dimension} unit`,
+        params: { importCode: 'UNIT_MISMATCH' },
+      });
+    }
+  })
+  .superRefine((column, ctx) => {
+    if (column.side === undefined) return;
+    const isSideField =
+      column.field !== 'club' && column.field !== 'build' && column.field !== 'ignore' && SIDE_FIELDS.has(column.field);
+    if (!isSideField) {
+      ctx.addIssue({ code: 'custom', path: ['side'], message: `${column.field} has no left/right side` });
+    }
+  });
+
+/**
+ * Zod schema of a recipe's JSON. Checks the shape, that every unit is known and fits its field's
+ * dimension, and that a side notation is given only for a left/right field.
+ * @example recipeSchema.parse({ delimiter: ';', columns: { 'Carry (m)': { field: 'carry', unit: 'm' } } })
+ */
+export const recipeSchema: z.ZodType<Recipe> = z
+  .object({
+    delimiter: z.enum([',', ';', '\t']).optional(),
+    decimal: z.enum(['.', ',']).optional(),
+    headerRow: z.number().int().min(0).max(10_000).optional(),
+    columns: z.record(z.string().max(200), columnSchema),
+  })
+  .strict();
