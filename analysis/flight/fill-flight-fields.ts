@@ -4,6 +4,13 @@ import { launchFromShot } from './launch-from-shot';
 import { simulateFlight, type FlightOptions, type FlightResult } from './simulate-flight';
 
 /** The shot fields the ball-flight model can supply, in the order they are listed when derived. */
+/**
+ * Below this ball speed the model fills nothing: the coefficient fits describe full-swing
+ * flight (Lyu et al. 2018 measured Reynolds numbers from 5·10⁴ up, about 17 m/s at sea level),
+ * and a chip or a putt rolls more than it flies.
+ */
+export const MIN_FILL_BALL_SPEED_MPS = 15;
+
 export const FLIGHT_FIELDS = ['carry', 'offline', 'apexHeight', 'descentAngle', 'flightTime'] as const;
 
 export type FlightField = (typeof FLIGHT_FIELDS)[number];
@@ -41,7 +48,7 @@ export function fillFlightFields(
   options?: FlightOptions,
 ): { values: ShotValues; derived: ShotField[] } {
   const shot = launchFromShot(values);
-  if (!shot) return { values, derived: [] };
+  if (!shot || shot.launch.ballSpeedMps < MIN_FILL_BALL_SPEED_MPS || shot.launch.launchAngleDeg <= 0) return { values, derived: [] };
   const missing = FLIGHT_FIELDS.filter((field) => values[field] === undefined && (field !== 'offline' || shot.sideKnown));
   if (missing.length === 0) return { values, derived: [] };
   const flight = simulateFlight(shot.launch, air, options);

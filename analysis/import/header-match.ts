@@ -5,6 +5,7 @@
  */
 import { findUnit, type UnitInfo } from '@/analysis/units';
 import { HEADER_WORDS, type HeaderWord } from './header-words';
+import { targetWords } from './shot-limits';
 import type { ColumnTarget, SideNotation } from './recipe';
 
 export interface ParsedHeader {
@@ -125,7 +126,7 @@ function withNote(c: HeaderCandidate, word: HeaderWord): HeaderCandidate {
 /**
  * The targets a header name matches, best first: exact phrases, then phrases contained as whole
  * words (longest first), then near spellings (one or two letters off). O(words × name length).
- * @example matchHeaderName('carry')[0] // => { target: 'carry', confidence: 0.95, reason: 'header "carry" is a name for carry' }
+ * @example matchHeaderName('ball speed')[0] // => { target: 'ballSpeed', confidence: 0.95, reason: 'header "ball speed" is a name for ball speed' }
  */
 export function matchHeaderName(name: string): HeaderCandidate[] {
   if (name === '') return [];
@@ -133,7 +134,7 @@ export function matchHeaderName(name: string): HeaderCandidate[] {
   const padded = ` ${name} `;
   for (const word of HEADER_WORDS) {
     if (word.phrase === name) {
-      out.push(withNote({ target: word.target, confidence: word.confidence, reason: `header "${name}" is a name for ${word.target}` }, word));
+      out.push(withNote({ target: word.target, confidence: word.confidence, reason: `header "${name}" is a name for ${targetWords(word.target)}` }, word));
     } else if (padded.includes(` ${word.phrase} `)) {
       // longer contained phrases are likelier to be what the header means
       const share = word.phrase.length / name.length;

@@ -18,7 +18,7 @@ import { isBlankRow, isSummaryRow } from './row-kinds';
 import { checkLimit, checkShotValues, SHOT_LIMITS } from './shot-limits';
 import { compileSideReader } from './side-notation';
 import { sniffDetail, type SniffResult } from './sniff';
-import { recipeOf, sampleColumns, sampleRows, suggestFromDetail, type ColumnSuggestion } from './suggest-mapping';
+import { recipeOf, sampleColumns, sampleRows, suggestFromDetail, type AmbiguousColumn, type ColumnSuggestion } from './suggest-mapping';
 import { stripBom } from './text-lines';
 import { unitWarnings, type ImportWarning } from './unit-plausibility';
 
@@ -51,7 +51,7 @@ export interface ImportResult {
   /** The automatic suggestion (before the recipe). */
   suggestions: ColumnSuggestion[];
   warnings: ImportWarning[];
-  ambiguous: { column: string; reason: string }[];
+  ambiguous: AmbiguousColumn[];
   /** Data rows seen (excluding blank and summary rows). */
   rows: number;
   /**
@@ -340,15 +340,12 @@ export function importBayFile(input: string, options: ImportOptions = {}): Impor
     let derived = derivedOf(mask);
     let finalValues = toValues(slots);
     if (fillFlight) {
+      // Values the model computes never reject a row: a fill that falls outside the limits is
+      // left out and the shot keeps what the file measured.
       const filled = fillFlight(finalValues);
-      finalValues = filled.values;
-      derived = [...derived, ...filled.derived.filter((f) => !derived.includes(f))];
-    }
-    if (fillFlight) {
-      const problem = checkShotValues(finalValues);
-      if (problem) {
-        rejected.push({ row, line, column: problem.field, reason: problem.reason });
-        return;
+      if (filled.derived.length > 0 && checkShotValues(filled.values) === null) {
+        finalValues = filled.values;
+        derived = [...derived, ...filled.derived.filter((f) => !derived.includes(f))];
       }
     }
     shots.push({ row, club: code, build, values: finalValues, derived });

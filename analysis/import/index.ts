@@ -13,7 +13,7 @@ export {
   type SideNotation,
 } from './recipe';
 export { sniff, disambiguateHeaders, type Delimiter, type SniffHints, type SniffResult } from './sniff';
-export { suggestMapping, type ColumnSuggestion, type MappingSuggestion } from './suggest-mapping';
+export { suggestMapping, type AmbiguousColumn, type ColumnSuggestion, type MappingSuggestion } from './suggest-mapping';
 export type { ImportWarning } from './unit-plausibility';
 export { importBayFile, type ImportOptions, type ImportResult, type RejectedRow } from './import-bay-file';
 export { parseClubName } from './club-name';

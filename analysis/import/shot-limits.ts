@@ -65,6 +65,14 @@ export const FIELD_WORDS: Readonly<Record<ShotField, string>> = {
   flightTime: 'flight time',
 };
 
+/** A column target in words: "ball speed", "the club", "the build". */
+export function targetWords(target: ShotField | 'club' | 'build' | 'ignore'): string {
+  if (target === 'club') return 'the club';
+  if (target === 'build') return 'the build';
+  if (target === 'ignore') return 'nothing Ovalyard keeps';
+  return FIELD_WORDS[target];
+}
+
 const UNIT_SUFFIX: Readonly<Record<CanonicalUnit, string>> = {
   'm/s': ' m/s',
   m: ' m',

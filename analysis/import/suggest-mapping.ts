@@ -12,6 +12,7 @@ import { compileNumberReader, isMissingCell, newCellState, type NumberReader } f
 import type { ColumnTarget, Recipe, RecipeColumn, SideNotation } from './recipe';
 import { isBlankRow, isSummaryRow } from './row-kinds';
 import { compileSideReader, detectSideNotation } from './side-notation';
+import { targetWords } from './shot-limits';
 import { sniffDetail, type SniffDetail, type SniffHints, type SniffResult } from './sniff';
 import { unitWarnings, type ImportWarning, type SampleColumn } from './unit-plausibility';
 
@@ -38,7 +39,19 @@ export interface MappingSuggestion {
   suggestions: ColumnSuggestion[];
   warnings: ImportWarning[];
   /** Columns whose suggestion is a guess the fitter should confirm. */
-  ambiguous: { column: string; reason: string }[];
+  ambiguous: AmbiguousColumn[];
+}
+
+/**
+ * A guess to confirm, and of which kind: two columns claim one field (`conflict`, `field` the
+ * field claimed), the header reads two ways (`header`), the unit is unknown or inferred
+ * (`unit`), the sign convention is assumed (`sign`).
+ */
+export interface AmbiguousColumn {
+  column: string;
+  reason: string;
+  kind: 'conflict' | 'header' | 'unit' | 'sign';
+  field: ColumnTarget;
 }
 
 /** Data rows of the head sample used for suggestions. */
@@ -203,7 +216,7 @@ export function suggestFromDetail(detail: SniffDetail, options: { unitWarnings?:
   const readNumber = compileNumberReader(sniffed.decimal, sniffed.thousands);
   const facts = columnFacts(detail, rows);
   const system = fileSystem(facts);
-  const ambiguous: { column: string; reason: string }[] = [];
+  const ambiguous: AmbiguousColumn[] = [];
   const warnings: ImportWarning[] = [];
   for (const doubt of sniffed.doubts) warnings.push({ code: 'NUMBER_FORMAT_DOUBT', message: doubt });
   for (const name of sniffed.duplicates) {
@@ -228,12 +241,14 @@ export function suggestFromDetail(detail: SniffDetail, options: { unitWarnings?:
     }
     if (best.target !== 'build' && best.target !== 'ignore' && owner.get(best.target) !== i) {
       const winner = facts[owner.get(best.target)!].header;
-      ambiguous.push({ column: f.header, reason: `also looks like ${best.target}, but "${winner}" matches better; ignored` });
-      return { ...base, field: 'ignore', unit: null, side: null, confidence: 0.4, reason: `${best.reason}; "${winner}" was taken for ${best.target}` };
+      ambiguous.push({ column: f.header, reason: `also looks like ${targetWords(best.target)}, but "${winner}" matches better; ignored`, kind: 'conflict', field: best.target });
+      return { ...base, field: 'ignore', unit: null, side: null, confidence: 0.4, reason: `${best.reason}; "${winner}" was taken for ${targetWords(best.target)}` };
     }
     let confidence = best.confidence;
     const reasons = [best.reason, ...best.notes];
-    if (best.note) ambiguous.push({ column: f.header, reason: best.note });
+    // A header that reads two ways is settled when its stated unit fits only the chosen field's kind.
+    const unitSettles = isShotField(best.target) && f.unit !== null && f.unit !== undefined && f.unit.dimension === fieldDimension(best.target);
+    if (best.note && !unitSettles) ambiguous.push({ column: f.header, reason: best.note, kind: 'header', field: best.target });
     if (!isShotField(best.target)) {
       return { ...base, field: best.target, unit: null, side: null, confidence: round(confidence), reason: reasons.join('; ') };
     }
@@ -245,14 +260,14 @@ export function suggestFromDetail(detail: SniffDetail, options: { unitWarnings?:
       confidence *= 0.5;
       reasons.push(`unit "${f.unknownUnit}" is not one Ovalyard knows`);
       warnings.push({ code: 'UNKNOWN_UNIT', column: f.header, message: `${f.header}: the unit "${f.unknownUnit}" is not known; choose the unit before importing.` });
-      ambiguous.push({ column: f.header, reason: `unknown unit "${f.unknownUnit}"` });
+      ambiguous.push({ column: f.header, reason: `unknown unit "${f.unknownUnit}"`, kind: 'unit', field });
     } else {
       const guess = defaultUnit(field, f, system, readNumber);
       unit = guess.unit;
       if (guess.doubt) {
         confidence *= 0.8;
         reasons.push(guess.doubt);
-        ambiguous.push({ column: f.header, reason: guess.doubt });
+        ambiguous.push({ column: f.header, reason: guess.doubt, kind: 'unit', field });
       } else reasons.push(`no unit given; ${FIELD_UNITS[field]} assumed`);
     }
     let side: SideNotation | null = null;
@@ -269,7 +284,7 @@ export function suggestFromDetail(detail: SniffDetail, options: { unitWarnings?:
         confidence *= 0.9;
         const doubt = 'signed values, sign convention not stated; + is right assumed';
         reasons.push(doubt);
-        ambiguous.push({ column: f.header, reason: doubt });
+        ambiguous.push({ column: f.header, reason: doubt, kind: 'sign', field });
       }
     }
     return { ...base, field, unit, side, confidence: round(confidence), reason: reasons.join('; ') };

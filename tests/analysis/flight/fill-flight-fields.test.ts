@@ -42,3 +42,14 @@ describe('fillFlightFields', () => {
     expect(fillFlightFields(input).values).toBe(input);
   });
 });
+
+describe('fillFlightFields below full-swing speeds', () => {
+  it('fillFlightFields for a putt (2 m/s) fills nothing: the fits describe full-swing flight', () => {
+    // Lyu et al. 2018 measured from Re 5·10⁴ (about 17 m/s at sea level); MIN_FILL_BALL_SPEED_MPS is 15.
+    const putt = { ballSpeed: 2, launchAngle: 2, spinRate: 35 };
+    expect(fillFlightFields(putt).derived).toEqual([]);
+  });
+  it('fillFlightFields for a ball launched at or below the ground plane fills nothing', () => {
+    expect(fillFlightFields({ ballSpeed: 40, launchAngle: -1, spinRate: 3000 }).derived).toEqual([]);
+  });
+});

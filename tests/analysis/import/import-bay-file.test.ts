@@ -165,11 +165,13 @@ describe('importBayFile options', () => {
     expect(r.shots[0].derived).toEqual(['carry']);
   });
 
-  it('importBayFile rejects a row whose fillFlight value breaks a limit', () => {
+  it('importBayFile keeps a shot whose fillFlight value breaks a limit, without the fill', () => {
     const r = importBayFile('Club,Ball Speed (m/s)\n7 Iron,50\n', {
       fillFlight: (values) => ({ values: { ...values, carry: -5 }, derived: ['carry'] }),
     });
-    expect(r.rejected[0]).toMatchObject({ row: 1, column: 'carry' });
+    expect(r.rejected).toEqual([]);
+    expect(r.shots[0].values.carry).toBeUndefined();
+    expect(r.shots[0].derived).not.toContain('carry');
   });
 });
 

@@ -1,6 +1,7 @@
 import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
 import { BaySafetyNote } from '@/components/fittings/bay-safety-note';
 import { FittingAnalysisArea } from '@/components/fittings/fitting-analysis-area';
+import { FittingBayFiles } from '@/components/fittings/fitting-bay-files';
 import { FittingDetails } from '@/components/fittings/fitting-details';
 import { formatDate } from '@/components/format';
 import { useFittingQuery } from '@/components/queries/fittings';
@@ -47,6 +48,7 @@ export default function FittingScreen() {
       >
         <FittingDetails fitting={fitting} />
       </Section>
+      <FittingBayFiles fitting={fitting} />
       <Section title="Shots and analysis">
         <FittingAnalysisArea fitting={fitting} />
       </Section>

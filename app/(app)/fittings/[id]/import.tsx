@@ -1,0 +1,30 @@
+import { Stack, useLocalSearchParams } from 'expo-router';
+import { ImportFlow } from '@/components/import/import-flow';
+import { useGoBack } from '@/components/navigation';
+import { useFittingQuery } from '@/components/queries/fittings';
+import { isStaff } from '@/components/session/permissions';
+import { useMe } from '@/components/session/session-provider';
+import { AppText } from '@/components/ui/app-text';
+import { ErrorState } from '@/components/ui/error-state';
+import { LoadingState } from '@/components/ui/loading-state';
+import { Screen } from '@/components/ui/screen';
+
+export default function ImportBayFileScreen() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  const me = useMe();
+  const goBack = useGoBack({ pathname: '/fittings/[id]', params: { id } });
+  const query = useFittingQuery(id);
+  return (
+    <Screen>
+      <Stack.Screen options={{ title: 'Import a bay file' }} />
+      {query.isPending ? <LoadingState label="Loading the fitting…" /> : null}
+      {query.isError ? <ErrorState error={query.error} onRetry={() => void query.refetch()} /> : null}
+      {query.data ? (
+        <>
+          <AppText tone="muted">{`Into the fitting of ${query.data.playerName}.`}</AppText>
+          <ImportFlow fittingId={id} units={me.units} canUseRecipes={isStaff(me.role)} onDone={goBack} />
+        </>
+      ) : null}
+    </Screen>
+  );
+}

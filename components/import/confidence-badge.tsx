@@ -1,0 +1,28 @@
+import { StyleSheet, View } from 'react-native';
+import { colors, radius, space } from '../theme';
+import { AppText } from '../ui/app-text';
+import { confidenceLevel } from './recipe-edit';
+
+type ConfidenceBadgeProps = { confidence: number; changed?: boolean };
+
+const LOOK = {
+  high: { text: 'Sure', bg: colors.successSoft, fg: colors.success },
+  medium: { text: 'Likely', bg: colors.surfaceSunk, fg: colors.ink },
+  low: { text: 'Guess: check', bg: colors.cautionSoft, fg: colors.caution },
+} as const;
+
+/** How sure the automatic mapping of a column is; a low one stands out. "Your choice" once edited. */
+export function ConfidenceBadge({ confidence, changed = false }: ConfidenceBadgeProps) {
+  const look = changed ? { text: 'Your choice', bg: colors.accentSoft, fg: colors.ink } : LOOK[confidenceLevel(confidence)];
+  return (
+    <View style={[styles.badge, { backgroundColor: look.bg }]} accessibilityLabel={`${look.text} (${Math.round(confidence * 100)} %)`}>
+      <AppText variant="caption" style={{ color: look.fg, fontFamily: 'Inter_600SemiBold' }}>
+        {look.text}
+      </AppText>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  badge: { borderRadius: radius.pill, paddingHorizontal: space.sm, paddingVertical: 2, alignSelf: 'flex-start' },
+});

@@ -1,0 +1,82 @@
+import { StyleSheet, View } from 'react-native';
+import type { ColumnSuggestion, ColumnTarget, RecipeColumn, SideNotation } from '@/analysis/import';
+import { colors, radius, space } from '../theme';
+import { AppText } from '../ui/app-text';
+import { SelectField } from '../ui/select-field';
+import { ConfidenceBadge } from './confidence-badge';
+import { confidenceLevel, isSideTarget, SIDE_OPTIONS, TARGET_LABELS, TARGET_OPTIONS, unitName, unitOptionsFor } from './recipe-edit';
+
+type MappingColumnRowProps = {
+  suggestion: ColumnSuggestion;
+  column: RecipeColumn;
+  /** The fitter changed this column. */
+  changed: boolean;
+  onField: (field: ColumnTarget) => void;
+  onUnit: (unit: string) => void;
+  onSide: (side: SideNotation) => void;
+};
+
+/** One column of the file: its header and samples as written, and what Ovalyard reads it as. */
+export function MappingColumnRow({ suggestion, column, changed, onField, onUnit, onSide }: MappingColumnRowProps) {
+  const header = suggestion.header;
+  const low = !changed && confidenceLevel(suggestion.confidence) === 'low';
+  const units = unitOptionsFor(column.field);
+  const unit = unitName(column.unit) ?? '';
+  const unitChoices = unit || units.length === 0 ? units : [{ value: '', label: `Choose (file says "${column.unit ?? '?'}")` }, ...units];
+  const ignored = column.field === 'ignore';
+  return (
+    <View style={[styles.row, low && styles.low, ignored && styles.ignored]} accessibilityLabel={`Column ${header}`}>
+      <View style={styles.head}>
+        <AppText variant="bodyStrong" style={styles.header} numberOfLines={2}>
+          {header}
+        </AppText>
+        <ConfidenceBadge confidence={suggestion.confidence} changed={changed} />
+      </View>
+      <AppText variant="caption" tone="muted" numberOfLines={1}>
+        {suggestion.samples.length ? suggestion.samples.join('  ·  ') : 'No values in the first rows'}
+      </AppText>
+      <View style={styles.controls}>
+        <View style={styles.target}>
+          <SelectField label={`${header}: read as`} hideLabel value={column.field} options={TARGET_OPTIONS} onChange={onField} attention={low} />
+        </View>
+        {units.length > 0 ? (
+          <View style={styles.small}>
+            <SelectField label={`${header}: unit`} hideLabel value={unit} options={unitChoices} onChange={(u) => u && onUnit(u)} attention={!unit} />
+          </View>
+        ) : null}
+        {isSideTarget(column.field) ? (
+          <View style={styles.small}>
+            <SelectField
+              label={`${header}: left and right`}
+              hideLabel
+              value={column.side ?? 'signed-right-positive'}
+              options={SIDE_OPTIONS}
+              onChange={onSide}
+            />
+          </View>
+        ) : null}
+      </View>
+      <AppText variant="caption" tone={low ? 'default' : 'muted'}>
+        {changed ? `Set by you to ${TARGET_LABELS[column.field]}. Suggested: ${TARGET_LABELS[suggestion.field]} (${suggestion.reason})` : suggestion.reason}
+      </AppText>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  row: {
+    gap: space.xs,
+    padding: space.md,
+    borderRadius: radius.md,
+    borderWidth: 1,
+    borderColor: colors.border,
+    backgroundColor: colors.surface,
+  },
+  low: { borderColor: colors.caution, borderLeftWidth: 4 },
+  ignored: { backgroundColor: colors.paper },
+  head: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between', gap: space.sm },
+  header: { flexShrink: 1 },
+  controls: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, marginTop: space.xs },
+  target: { flexGrow: 2, flexBasis: 160, minWidth: 0, maxWidth: 420 },
+  small: { flexGrow: 1, flexBasis: 110, minWidth: 0, maxWidth: 240 },
+});

@@ -1,0 +1,41 @@
+/**
+ * The preview table's columns and cells: club, build and a few key fields of each converted shot,
+ * in the user's units.
+ */
+import type { Shot, ShotField } from '@/analysis/fields';
+import { displayUnits, findUnit, fromCanonical, type UnitSystem } from '@/analysis/units';
+import { TARGET_LABELS } from './recipe-edit';
+
+/** Fields the preview shows when the shots have them, in this order. */
+export const PREVIEW_FIELDS: readonly ShotField[] = ['ballSpeed', 'clubSpeed', 'launchAngle', 'spinRate', 'carry', 'offline', 'total'];
+
+/** Decimals shown per field (spin in whole rpm; speeds, distances and angles to 0.1). */
+const DECIMALS: Partial<Record<ShotField, number>> = { spinRate: 0, backSpin: 0, sideSpin: 0, smashFactor: 2 };
+
+export type PreviewColumn = { field: ShotField; title: string; unit: string };
+
+/** The preview fields that at least one shot has, with their title and display unit. */
+export function previewColumns(shots: readonly Shot[], system: UnitSystem, max = 5): PreviewColumn[] {
+  const units = displayUnits(system);
+  return PREVIEW_FIELDS.filter((f) => shots.some((s) => s.values[f] !== undefined))
+    .slice(0, max)
+    .map((field) => ({ field, title: TARGET_LABELS[field], unit: findUnit(units[field])?.label ?? units[field] }));
+}
+
+/**
+ * One shot value in the user's unit, or "–" when the shot lacks it. A left/right value is written
+ * with its side: offline −4.1 m (left) → "4.1 L" (+ is right in Ovalyard).
+ * @example formatShotValue({ …, values: { carry: 0.9144 * 150 } }, 'carry', 'imperial') // => '150.0'
+ */
+export function formatShotValue(shot: Shot, field: ShotField, system: UnitSystem): string {
+  const v = shot.values[field];
+  if (v === undefined) return '–';
+  const shown = fromCanonical(v, displayUnits(system)[field], field);
+  const digits = DECIMALS[field] ?? 1;
+  if (field === 'offline' || field === 'launchDirection') {
+    const text = Math.abs(shown).toFixed(digits);
+    if (Number(text) === 0) return text;
+    return `${text} ${shown < 0 ? 'L' : 'R'}`;
+  }
+  return shown.toFixed(digits);
+}
