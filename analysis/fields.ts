@@ -57,6 +57,31 @@ export const FIELD_UNITS: Readonly<Record<ShotField, CanonicalUnit>> = {
   flightTime: 's',
 };
 
+/** Trade names of the fields, as the UI and messages write them (capitalised). */
+export const FIELD_LABELS: Readonly<Record<ShotField, string>> = {
+  clubSpeed: 'Club speed',
+  ballSpeed: 'Ball speed',
+  smashFactor: 'Smash factor',
+  launchAngle: 'Launch angle',
+  launchDirection: 'Launch direction',
+  spinRate: 'Spin rate',
+  backSpin: 'Back spin',
+  sideSpin: 'Side spin',
+  spinAxis: 'Spin axis',
+  attackAngle: 'Attack angle',
+  clubPath: 'Club path',
+  faceAngle: 'Face angle',
+  faceToPath: 'Face to path',
+  dynamicLoft: 'Dynamic loft',
+  spinLoft: 'Spin loft',
+  carry: 'Carry',
+  total: 'Total',
+  offline: 'Offline',
+  apexHeight: 'Apex height',
+  descentAngle: 'Descent angle',
+  flightTime: 'Flight time',
+};
+
 /** Fields whose sign means left/right (+ = right). */
 export const SIDE_FIELDS: ReadonlySet<ShotField> = new Set<ShotField>([
   'offline',

@@ -8,27 +8,12 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { simulateFlight } from '@/analysis/flight';
+import { normalFrom, seededRandom } from './lib/seeded-random';
 
 const OUT = path.resolve(__dirname, '../fixtures/demo');
 const MPH = 0.44704;
 const YD = 0.9144;
 const FT = 0.3048;
-
-/** mulberry32: a small seeded PRNG. */
-function rng(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-function normal(r: () => number) {
-  const u = Math.max(r(), 1e-12);
-  return Math.sqrt(-2 * Math.log(u)) * Math.cos(2 * Math.PI * r());
-}
 
 interface ClubPlan {
   club: string;
@@ -62,19 +47,19 @@ interface Row {
 }
 
 function session(plans: ClubPlan[], seed: number, air = { temperatureC: 18, altitudeM: 40, humidityPct: 55 }): Row[] {
-  const r = rng(seed);
+  const r = seededRandom(seed);
   const rows: Row[] = [];
   for (const p of plans) {
     const s = p.spread ?? 1;
     for (let i = 0; i < p.shots; i += 1) {
       const mishit = r() < 0.07; // an occasional thin or toe strike: a stray for the demo
-      const clubMph = p.clubMph * (1 + 0.015 * s * normal(r));
-      const smash = (mishit ? p.smash * 0.86 : p.smash) * (1 + 0.008 * normal(r));
+      const clubMph = p.clubMph * (1 + 0.015 * s * normalFrom(r));
+      const smash = (mishit ? p.smash * 0.86 : p.smash) * (1 + 0.008 * normalFrom(r));
       const ballMph = clubMph * smash;
-      const launchDeg = p.launchDeg + 1.1 * s * normal(r) - (mishit ? 2.5 : 0);
-      const spinRpm = Math.max(800, p.spinRpm * (1 + 0.09 * s * normal(r)));
-      const axisDeg = p.axisDeg + 4.5 * s * normal(r);
-      const directionDeg = p.directionDeg + 1.8 * s * normal(r);
+      const launchDeg = p.launchDeg + 1.1 * s * normalFrom(r) - (mishit ? 2.5 : 0);
+      const spinRpm = Math.max(800, p.spinRpm * (1 + 0.09 * s * normalFrom(r)));
+      const axisDeg = p.axisDeg + 4.5 * s * normalFrom(r);
+      const directionDeg = p.directionDeg + 1.8 * s * normalFrom(r);
       const f = simulateFlight({ ballSpeedMps: ballMph * MPH, launchAngleDeg: launchDeg, spinRateRpm: spinRpm, spinAxisDeg: axisDeg, launchDirectionDeg: directionDeg }, air);
       rows.push({
         club: p.label,

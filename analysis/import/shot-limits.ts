@@ -9,7 +9,7 @@
  * outer limits (common practice, no source): they catch wrong units and broken rows, not mishits.
  */
 import { z } from 'zod';
-import { FIELD_UNITS, SHOT_FIELDS, type CanonicalUnit, type ShotField, type ShotValues } from '@/analysis/fields';
+import { FIELD_LABELS, FIELD_UNITS, SHOT_FIELDS, type CanonicalUnit, type ShotField, type ShotValues } from '@/analysis/fields';
 
 export interface Limit {
   min: number;
@@ -40,30 +40,10 @@ export const SHOT_LIMITS: Readonly<Record<ShotField, Limit>> = {
   flightTime: { min: 0, max: 20 },
 };
 
-/** Trade words for each field, for messages. */
-export const FIELD_WORDS: Readonly<Record<ShotField, string>> = {
-  clubSpeed: 'club speed',
-  ballSpeed: 'ball speed',
-  smashFactor: 'smash factor',
-  launchAngle: 'launch angle',
-  launchDirection: 'launch direction',
-  spinRate: 'spin rate',
-  backSpin: 'back spin',
-  sideSpin: 'side spin',
-  spinAxis: 'spin axis',
-  attackAngle: 'attack angle',
-  clubPath: 'club path',
-  faceAngle: 'face angle',
-  faceToPath: 'face to path',
-  dynamicLoft: 'dynamic loft',
-  spinLoft: 'spin loft',
-  carry: 'carry',
-  total: 'total',
-  offline: 'offline',
-  apexHeight: 'apex height',
-  descentAngle: 'descent angle',
-  flightTime: 'flight time',
-};
+/** Trade words for each field, for messages ("ball speed"). */
+export const FIELD_WORDS: Readonly<Record<ShotField, string>> = Object.fromEntries(
+  SHOT_FIELDS.map((f) => [f, FIELD_LABELS[f].toLowerCase()]),
+) as Record<ShotField, string>;
 
 /** A column target in words: "ball speed", "the club", "the build". */
 export function targetWords(target: ShotField | 'club' | 'build' | 'ignore'): string {

@@ -2,6 +2,7 @@
 // Run: node --import tsx -e "console.log(require('./scripts/bench/analyse.ts').benchAnalyse())"
 import type { Shot, ShotField } from '@/analysis/fields';
 import { analyseSession } from '@/analysis/session';
+import { seededRandom } from '../lib/seeded-random';
 
 const CLUBS = ['DR', '3W', '5W', '4H', '5I', '6I', '7I', '8I', '9I', 'PW', 'GW', 'SW', 'LW', 'W58'];
 const BUILDS = ['A', 'B', 'C'];
@@ -10,21 +11,10 @@ const FIELDS: ShotField[] = [
   'spinAxis', 'carry', 'total', 'offline', 'apexHeight', 'descentAngle', 'flightTime',
 ];
 
-/** Small seeded generator (mulberry32) so every run sees the same invented shots. */
-function random(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /** Invented shots for the benchmark: plausible numbers, no real player or device. */
 export function benchShots(count = 100_000, seed = 7): Shot[] {
-  const next = random(seed);
+  const next = seededRandom(seed);
   const normal = () => Math.sqrt(-2 * Math.log(1 - next())) * Math.cos(2 * Math.PI * next());
   const shots: Shot[] = new Array(count);
   for (let i = 0; i < count; i++) {

@@ -5,6 +5,7 @@
  */
 import Papa from 'papaparse';
 import { importBayFile, shotValuesSchema, checkShotValues } from '@/analysis/import';
+import { seededRandom } from '../lib/seeded-random';
 
 const HEADERS = [
   'Shot', 'Club', 'Build', 'Ball Speed (mph)', 'Club Speed (mph)', 'Smash', 'Launch Angle (deg)',
@@ -13,23 +14,12 @@ const HEADERS = [
   'Descent Angle (deg)', 'Flight Time (s)',
 ];
 
-/** A small deterministic generator (mulberry32), so every run reads the same file. */
-function random(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /** An invented session: a 7 iron with two shafts and a driver with two heads, repeated. */
 export function generateBayFile(rows: number, options: { delimiter?: ',' | ';'; decimal?: '.' | ',' } = {}): string {
   const delimiter = options.delimiter ?? ',';
   const decimal = options.decimal ?? '.';
-  const rnd = random(20240501);
+  const rnd = seededRandom(20240501);
   const gauss = () => (rnd() + rnd() + rnd() + rnd() - 2) * 1.2;
   const num = (x: number, digits: number) => {
     const s = x.toFixed(digits);
