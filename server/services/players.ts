@@ -31,8 +31,9 @@ export function visiblePlayers(actor: Actor): WhereOptions<PlayerModel> {
 }
 
 export async function listPlayers(actor: Actor, filters: PlayerFilters): Promise<Player[]> {
-  const where: WhereOptions<PlayerModel> = filters.q
-    ? { [Op.and]: [visiblePlayers(actor), { name: { [Op.like]: `%${filters.q.replace(/[%_\\]/g, '\\$&')}%` } }] }
+  const like = filters.q ? `%${filters.q.replace(/[%_\\]/g, '\\$&')}%` : null;
+  const where: WhereOptions<PlayerModel> = like
+    ? { [Op.and]: [visiblePlayers(actor), { [Op.or]: [{ name: { [Op.like]: like } }, { email: { [Op.like]: like } }] }] }
     : visiblePlayers(actor);
   const players = await PlayerModel.findAll({ where, order: [['name', 'ASC']], limit: 500 });
   const counts = (await Fitting.count({

@@ -38,6 +38,13 @@ describe('/api/players', () => {
     expect((await agent.get('/api/players').query({ q: '%' })).body).toEqual([]);
   });
 
+  it('GET ?q= as a fitter also finds a player by e-mail', async () => {
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const created = await agent.post('/api/players').set(APP_HEADER).send({ ...newPlayer, name: 'Quill Arden', email: 'quill.arden@test.example' });
+    const res = await agent.get('/api/players').query({ q: 'quill.arden@' });
+    expect(res.body.map((p: { id: string }) => p.id)).toEqual([created.body.id]);
+  });
+
   it('GET as a player lists only their own profile', async () => {
     const agent = await signedInAgent(ctx.app, world.playerUser.email);
     const res = await agent.get('/api/players');
