@@ -352,17 +352,27 @@ export function importBayFile(input: string, options: ImportOptions = {}): Impor
   };
 
   // step mode: rows are handed over one at a time and not kept, which spares the collector
-  Papa.parse<string[]>(text.slice(detail.dataOffset), {
-    delimiter: sniffed.delimiter,
-    newline: sniffed.newline,
-    header: false,
-    dynamicTyping: false,
-    skipEmptyLines: false,
-    step: (results) => {
-      const error = results.errors.length > 0 ? results.errors[0].message : null;
-      onRow(results.data, error);
-    },
-  });
+  const data = text.slice(detail.dataOffset);
+  if (data.indexOf('"') === -1) {
+    // No quote anywhere: cells cannot hold a delimiter or a line break, so a plain split reads
+    // the rows exactly as papaparse's own fast mode does, without its per-row result objects.
+    const lines = data.split(sniffed.newline);
+    if (lines.length > 0 && lines[lines.length - 1] === '') lines.pop();
+    for (let i = 0; i < lines.length; i++) onRow(lines[i].split(sniffed.delimiter), null);
+    if (/(\r\n|\n|\r)$/.test(data)) onRow([''], null); // as papaparse: the final break ends in an empty line
+  } else {
+    Papa.parse<string[]>(data, {
+      delimiter: sniffed.delimiter,
+      newline: sniffed.newline,
+      header: false,
+      dynamicTyping: false,
+      skipEmptyLines: false,
+      step: (results) => {
+        const error = results.errors.length > 0 ? results.errors[0].message : null;
+        onRow(results.data, error);
+      },
+    });
+  }
   // the line break that ends the last line is not a blank line
   const last = skipped[skipped.length - 1];
   if (last && last.line === lastBlankLine && lastBlankLine === firstLine + r && /(\r\n|\n|\r)$/.test(text)) skipped.pop();
