@@ -1,7 +1,7 @@
 import { useRouter } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 import type { Fitting } from '@/server/schemas';
-import { formatDate, plural } from '../format';
+import { BayFileRow } from '../import/bay-file-row';
 import { useBayFilesQuery } from '../queries/bay-files';
 import { isStaff } from '../session/permissions';
 import { useMe } from '../session/session-provider';
@@ -15,13 +15,14 @@ import { Section } from '../ui/section';
 
 type FittingBayFilesProps = { fitting: Fitting };
 
-/** The fitting's bay files with their counts, and the way to import another. */
+/** The fitting's bay files with their counts, the way to import another, and (staff) to re-map or delete one. */
 export function FittingBayFiles({ fitting }: FittingBayFilesProps) {
   const router = useRouter();
   const me = useMe();
   const files = useBayFilesQuery(fitting.id);
+  const staff = isStaff(me.role);
   // Staff import into any fitting of the shop; a player only into their own remote fitting.
-  const canImport = isStaff(me.role) || fitting.remote;
+  const canImport = staff || fitting.remote;
   const open = () => router.push({ pathname: '/fittings/[id]/import', params: { id: fitting.id } });
   return (
     <Section title="Bay files" action={canImport ? <Button title="Import a bay file" compact onPress={open} /> : null}>
@@ -31,20 +32,8 @@ export function FittingBayFiles({ fitting }: FittingBayFilesProps) {
       {files.data && files.data.length > 0 ? (
         <Card>
           {files.data.map((f, i) => (
-            <View key={f.id} style={[styles.row, i > 0 && styles.divided]}>
-              <AppText variant="bodyStrong" numberOfLines={1}>
-                {f.fileName}
-              </AppText>
-              <AppText variant="caption" tone="muted">
-                {[
-                  plural(f.shotCount, 'shot'),
-                  f.report.rejected.length ? `${plural(f.report.rejected.length, 'row')} not imported` : null,
-                  f.report.skipped.length ? `${f.report.skipped.length} skipped` : null,
-                  `added ${formatDate(f.createdAt)}`,
-                ]
-                  .filter(Boolean)
-                  .join(' · ')}
-              </AppText>
+            <View key={f.id} style={i > 0 && styles.divided}>
+              <BayFileRow bayFile={f} canChange={staff} />
             </View>
           ))}
         </Card>
@@ -54,6 +43,5 @@ export function FittingBayFiles({ fitting }: FittingBayFilesProps) {
 }
 
 const styles = StyleSheet.create({
-  row: { gap: 2, paddingVertical: space.xs },
   divided: { borderTopWidth: StyleSheet.hairlineWidth, borderTopColor: colors.border, paddingTop: space.sm },
 });

@@ -3,6 +3,7 @@
  * server takes (server/schemas/bay-files.ts, buildAssignmentSchema).
  */
 import { compareClubs } from '@/analysis/clubs';
+import type { Recipe } from '@/analysis/import';
 import type { BuildAssignment } from '@/server/schemas';
 
 export type BuildMode = BuildAssignment['mode'];
@@ -50,4 +51,28 @@ export function buildAssignmentFor(choice: BuildChoice): BuildAssignment | null 
 /** The clubs of a preview's groups, each once, in bag order (unknown names last). */
 export function clubsOfGroups(groups: readonly { club: string }[]): string[] {
   return [...new Set(groups.map((g) => g.club))].sort(compareClubs);
+}
+
+/**
+ * The build choice a stored file was most likely imported with, read back from its recipe and
+ * the groups of its report (the file keeps no record of the choice itself): a recipe with a build
+ * column → from the file; no build on any shot → from the file (nothing to read); one build for
+ * every shot → one for the file; one build per club → per club. A column fallback cannot be told
+ * apart from the file's own values and is not recovered. O(groups).
+ * @example buildChoiceOfStored({ columns: {} }, [{ club: 'DR', build: 'Set B' }, { club: '7I', build: 'Set B' }]).mode // => 'file'
+ */
+export function buildChoiceOfStored(recipe: Recipe, groups: readonly { club: string; build: string | null }[]): BuildChoice {
+  if (Object.values(recipe.columns).some((c) => c.field === 'build')) return INITIAL_BUILD_CHOICE;
+  const builds = new Set(groups.map((g) => g.build));
+  if (builds.size === 0 || (builds.size === 1 && builds.has(null))) return INITIAL_BUILD_CHOICE;
+  if (builds.size === 1 && groups.length > 0) return { ...INITIAL_BUILD_CHOICE, mode: 'file', fileBuild: groups[0].build ?? '' };
+  const byClub: Record<string, string> = {};
+  for (const g of groups) {
+    const seen = byClub[g.club];
+    // two builds for one club cannot come from a per-club choice: leave it to the fitter
+    if (seen !== undefined && seen !== (g.build ?? '')) return INITIAL_BUILD_CHOICE;
+    byClub[g.club] = g.build ?? '';
+  }
+  for (const club of Object.keys(byClub)) if (!byClub[club]) delete byClub[club];
+  return { ...INITIAL_BUILD_CHOICE, mode: 'club', byClub };
 }

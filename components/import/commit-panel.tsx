@@ -1,6 +1,5 @@
 import { StyleSheet, View } from 'react-native';
 import { ApiError, errorMessage } from '../api-client';
-import { plural } from '../format';
 import { space } from '../theme';
 import { AppText } from '../ui/app-text';
 import { Button } from '../ui/button';
@@ -10,18 +9,20 @@ import { importErrorTitle } from './import-words';
 import type { CommitPhase } from './use-import-session';
 
 type CommitPanelProps = {
-  phase: CommitPhase;
+  /** The button's words ("Import 48 shots", "Apply the new mapping") and its accessible name. */
+  title: string;
+  accessibilityLabel: string;
+  /** Upload progress (an import); a re-map sends no file and shows only the busy button. */
+  phase?: CommitPhase;
   error: unknown;
   busy: boolean;
-  /** Shots the current preview imports. */
-  shotCount: number;
   /** Why the import cannot start now, or null. */
   blocker: string | null;
   onCommit: () => void;
 };
 
-/** The import button, its progress (upload, then processing) and its error in the page. */
-export function CommitPanel({ phase, error, busy, shotCount, blocker, onCommit }: CommitPanelProps) {
+/** The import (or apply) button, its progress (upload, then processing) and its error in the page. */
+export function CommitPanel({ title, accessibilityLabel, phase = { kind: 'idle' }, error, busy, blocker, onCommit }: CommitPanelProps) {
   const code = error instanceof ApiError ? error.code : undefined;
   return (
     <View style={styles.box}>
@@ -48,8 +49,8 @@ export function CommitPanel({ phase, error, busy, shotCount, blocker, onCommit }
       ) : null}
       {blocker ? <AppText tone="muted">{blocker}</AppText> : null}
       <Button
-        title={shotCount > 0 ? `Import ${plural(shotCount, 'shot')}` : 'Import'}
-        accessibilityLabel="Import the bay file"
+        title={title}
+        accessibilityLabel={accessibilityLabel}
         onPress={onCommit}
         busy={busy}
         disabled={blocker !== null}

@@ -3,7 +3,11 @@ import { colors, radius, space } from '../theme';
 import { AppText } from '../ui/app-text';
 import { confidenceLevel } from './recipe-edit';
 
-type ConfidenceBadgeProps = { confidence: number; changed?: boolean };
+type ConfidenceBadgeProps = {
+  confidence: number;
+  /** Who chose this reading instead of the suggestion ("Your choice", "As stored"); shown instead. */
+  chosenBy?: string;
+};
 
 const LOOK = {
   high: { text: 'Sure', bg: colors.successSoft, fg: colors.success },
@@ -11,9 +15,9 @@ const LOOK = {
   low: { text: 'Guess: check', bg: colors.cautionSoft, fg: colors.caution },
 } as const;
 
-/** How sure the automatic mapping of a column is; a low one stands out. "Your choice" once edited. */
-export function ConfidenceBadge({ confidence, changed = false }: ConfidenceBadgeProps) {
-  const look = changed ? { text: 'Your choice', bg: colors.accentSoft, fg: colors.ink } : LOOK[confidenceLevel(confidence)];
+/** How sure the automatic mapping of a column is; a low one stands out. Who chose it, once not the suggestion. */
+export function ConfidenceBadge({ confidence, chosenBy }: ConfidenceBadgeProps) {
+  const look = chosenBy ? { text: chosenBy, bg: colors.accentSoft, fg: colors.ink } : LOOK[confidenceLevel(confidence)];
   return (
     <View style={[styles.badge, { backgroundColor: look.bg }]} accessibilityLabel={`${look.text} (${Math.round(confidence * 100)} %)`}>
       <AppText variant="caption" style={{ color: look.fg, fontFamily: 'Inter_600SemiBold' }}>

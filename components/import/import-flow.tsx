@@ -1,23 +1,13 @@
 import { StyleSheet, View } from 'react-native';
 import type { UnitSystem } from '@/analysis/units';
-import { ApiError, errorMessage } from '../api-client';
+import { plural } from '../format';
 import { space } from '../theme';
-import { AppText } from '../ui/app-text';
-import { LoadingState } from '../ui/loading-state';
-import { Notice } from '../ui/notice';
-import { Section } from '../ui/section';
-import { BuildChoiceSection } from './build-choice-section';
-import { clubsOfGroups } from './build-choice';
 import { CommitPanel } from './commit-panel';
 import { FilePickStep } from './file-pick-step';
-import { importErrorTitle } from './import-words';
 import { ImportResult } from './import-result';
-import { ImportWarnings } from './import-warnings';
-import { MappingStep } from './mapping-step';
-import { PreviewShots } from './preview-shots';
+import { mappingBlocker } from './mapping-blocker';
+import { MappingReview } from './mapping-review';
 import { RecipeChoiceSection } from './recipe-choice-section';
-import { RejectedRows } from './rejected-rows';
-import { effectiveColumn } from './recipe-edit';
 import { useImportSession } from './use-import-session';
 
 type ImportFlowProps = {
@@ -31,71 +21,50 @@ type ImportFlowProps = {
 /** Pick a bay file, check and correct its mapping against a live preview, then import it. */
 export function ImportFlow({ fittingId, units, canUseRecipes, onDone }: ImportFlowProps) {
   const session = useImportSession(fittingId);
-  const { shown, preview, committed } = session;
-  if (committed) return <ImportResult bayFile={committed} onDone={onDone} onAnother={() => session.setFile(null)} />;
-
-  const previewError = preview.isError ? preview.error : null;
-  const blocker = !shown
-    ? 'Choose a file first.'
-    : shown.duplicateOf
-      ? 'This file is already in the fitting.'
-      : !session.buildsComplete
-        ? 'Name the build first.'
-        : previewError
-          ? 'Fix the problem above first.'
-          : session.previewBehind
-            ? 'Updating the preview…'
-            : shown.report.imported === 0
-              ? 'No row converts to a shot with this mapping.'
-              : null;
-  const hasBuildColumn =
-    shown?.suggestions.some((s) => effectiveColumn(s.header, session.overrides, shown.recipe, s).field === 'build') ?? false;
+  const { shown, committed } = session;
+  if (committed) {
+    return (
+      <ImportResult
+        bayFile={committed}
+        title="Imported"
+        onDone={onDone}
+        another={{ title: 'Import another file', onPress: () => session.setFile(null) }}
+      />
+    );
+  }
+  const shotCount = shown?.report.imported ?? 0;
+  const blocker = mappingBlocker({
+    hasPreview: shown !== undefined,
+    noPreview: 'Choose a file first.',
+    duplicate: shown?.duplicateOf != null,
+    buildsComplete: session.buildsComplete,
+    previewFailed: session.preview.isError,
+    previewBehind: session.previewBehind,
+    shotCount,
+  });
 
   return (
     <View style={styles.flow}>
       <FilePickStep file={session.file} onFile={session.setFile} disabled={session.commit.busy} />
-      {previewError ? (
-        <Notice tone="danger" title={importErrorTitle(previewError instanceof ApiError ? previewError.code : undefined)}>
-          {errorMessage(previewError)}
-        </Notice>
+      <MappingReview session={session} units={units} hasFile={session.file !== null} showDuplicate fromRecipe={session.recipeId !== null} />
+      {shown && canUseRecipes ? (
+        <RecipeChoiceSection
+          recipeId={session.recipeId}
+          onRecipeId={session.setRecipeId}
+          saveAs={session.saveRecipeAs}
+          onSaveAs={session.setSaveRecipeAs}
+        />
       ) : null}
-      {session.file && !shown && preview.isFetching ? <LoadingState label="Reading the file…" /> : null}
       {shown ? (
-        <>
-          <ImportWarnings preview={shown} />
-          <MappingStep session={session} preview={shown} />
-          <BuildChoiceSection
-            value={session.builds}
-            onChange={session.setBuilds}
-            clubs={clubsOfGroups(shown.report.groups)}
-            hasBuildColumn={hasBuildColumn}
-          />
-          <Section title="Preview">
-            {session.previewBehind ? (
-              <AppText variant="caption" tone="muted">
-                Updating…
-              </AppText>
-            ) : null}
-            <PreviewShots shots={shown.shots} total={shown.report.imported} units={units} />
-            <RejectedRows report={shown.report} />
-          </Section>
-          {canUseRecipes ? (
-            <RecipeChoiceSection
-              recipeId={session.recipeId}
-              onRecipeId={session.setRecipeId}
-              saveAs={session.saveRecipeAs}
-              onSaveAs={session.setSaveRecipeAs}
-            />
-          ) : null}
-          <CommitPanel
-            phase={session.commit.phase}
-            error={session.commit.error}
-            busy={session.commit.busy}
-            shotCount={shown.report.imported}
-            blocker={blocker}
-            onCommit={session.commit.start}
-          />
-        </>
+        <CommitPanel
+          title={shotCount > 0 ? `Import ${plural(shotCount, 'shot')}` : 'Import'}
+          accessibilityLabel="Import the bay file"
+          phase={session.commit.phase}
+          error={session.commit.error}
+          busy={session.commit.busy}
+          blocker={blocker}
+          onCommit={session.commit.start}
+        />
       ) : null}
     </View>
   );

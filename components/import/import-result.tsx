@@ -8,22 +8,32 @@ import { Notice } from '../ui/notice';
 import { Section } from '../ui/section';
 import { RejectedRows } from './rejected-rows';
 
-type ImportResultProps = { bayFile: BayFile; onDone: () => void; onAnother: () => void };
+type ImportResultProps = {
+  bayFile: BayFile;
+  /** The section title: "Imported", "New mapping applied". */
+  title: string;
+  /** A line under the counts (a re-map: the count before, and what stays). */
+  note?: string;
+  onDone: () => void;
+  /** The second way on ("Import another file", "Change it again"). */
+  another: { title: string; onPress: () => void };
+};
 
-/** What the stored import did: shots imported, rows rejected with reasons, lines skipped. */
-export function ImportResult({ bayFile, onDone, onAnother }: ImportResultProps) {
+/** What the stored import (or re-map) did: shots imported, rows rejected with reasons, lines skipped. */
+export function ImportResult({ bayFile, title, note, onDone, another }: ImportResultProps) {
   const { report } = bayFile;
   const groups = report.groups.map((g) => `${g.club}${g.build ? ` · ${g.build}` : ''}: ${g.n}`);
   return (
-    <Section title="Imported">
+    <Section title={title}>
       <Notice tone="success" title={`${plural(bayFile.shotCount, 'shot')} imported`}>
         <AppText>{`From "${bayFile.fileName}": ${plural(report.rows, 'row')} read, ${plural(report.rejected.length, 'row')} not imported.`}</AppText>
+        {note ? <AppText>{note}</AppText> : null}
       </Notice>
       {groups.length ? <AppText tone="muted">{groups.join('   ')}</AppText> : null}
       <RejectedRows report={report} />
       <View style={styles.actions}>
         <Button title="Back to the fitting" onPress={onDone} />
-        <Button title="Import another file" variant="secondary" onPress={onAnother} />
+        <Button title={another.title} variant="secondary" onPress={another.onPress} />
       </View>
     </Section>
   );

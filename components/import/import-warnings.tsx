@@ -5,12 +5,19 @@ import { AppText } from '../ui/app-text';
 import { Notice } from '../ui/notice';
 import { warningTitle } from './import-words';
 
-type ImportWarningsProps = { preview: BayFilePreview };
+type ImportWarningsProps = {
+  preview: BayFilePreview;
+  /** Off for a re-map: the stored file is, of course, already in the fitting. */
+  showDuplicate?: boolean;
+};
 
 /** What the fitter should check before importing: a duplicate file, unit doubts, format doubts. */
-export function ImportWarnings({ preview }: ImportWarningsProps) {
-  const { duplicateOf, report, sniff } = preview;
+export function ImportWarnings({ preview, showDuplicate = true }: ImportWarningsProps) {
+  const { report, sniff } = preview;
+  const duplicateOf = showDuplicate ? preview.duplicateOf : null;
   const unknown = report.unknownClubs;
+  // Nothing to check: no empty block (it would still take the page's gap).
+  if (!duplicateOf && report.warnings.length === 0 && sniff.doubts.length === 0 && unknown.length === 0) return null;
   return (
     <View style={styles.list}>
       {duplicateOf ? (

@@ -71,3 +71,17 @@ export function summarizeSkipped(skipped: readonly { line: number; reason: strin
   });
 }
 
+
+/**
+ * The question before a bay file is deleted, naming what leaves with it.
+ * @example deleteBayFileQuestion('bay-1.csv', 48) // => 'Delete bay-1.csv? Its 48 shots leave the analysis.'
+ */
+export function deleteBayFileQuestion(fileName: string, shotCount: number): string {
+  if (shotCount === 0) return `Delete ${fileName}? It has no shots in the analysis.`;
+  return `Delete ${fileName}? Its ${plural(shotCount, 'shot')} ${shotCount === 1 ? 'leaves' : 'leave'} the analysis.`;
+}
+
+/** The question before a saved recipe is deleted; files imported with it keep their mapping. */
+export function deleteRecipeQuestion(name: string): string {
+  return `Delete the recipe "${name}"? Bay files already imported with it keep their mapping.`;
+}

@@ -3,23 +3,24 @@ import type { ColumnSuggestion, ColumnTarget, RecipeColumn, SideNotation } from 
 import { colors, radius, space } from '../theme';
 import { AppText } from '../ui/app-text';
 import { SelectField } from '../ui/select-field';
+import type { ColumnNote } from './column-note';
 import { ConfidenceBadge } from './confidence-badge';
-import { confidenceLevel, isSideTarget, SIDE_OPTIONS, TARGET_LABELS, TARGET_OPTIONS, unitName, unitOptionsFor } from './recipe-edit';
+import { isSideTarget, SIDE_OPTIONS, TARGET_OPTIONS, unitName, unitOptionsFor } from './recipe-edit';
 
 type MappingColumnRowProps = {
   suggestion: ColumnSuggestion;
   column: RecipeColumn;
-  /** The fitter changed this column. */
-  changed: boolean;
+  /** Why it is read this way (column-note.ts). */
+  note: ColumnNote;
   onField: (field: ColumnTarget) => void;
   onUnit: (unit: string) => void;
   onSide: (side: SideNotation) => void;
 };
 
 /** One column of the file: its header and samples as written, and what Ovalyard reads it as. */
-export function MappingColumnRow({ suggestion, column, changed, onField, onUnit, onSide }: MappingColumnRowProps) {
+export function MappingColumnRow({ suggestion, column, note, onField, onUnit, onSide }: MappingColumnRowProps) {
   const header = suggestion.header;
-  const low = !changed && confidenceLevel(suggestion.confidence) === 'low';
+  const low = note.attention;
   const units = unitOptionsFor(column.field);
   const unit = unitName(column.unit) ?? '';
   const unitChoices = unit || units.length === 0 ? units : [{ value: '', label: `Choose (file says "${column.unit ?? '?'}")` }, ...units];
@@ -30,7 +31,7 @@ export function MappingColumnRow({ suggestion, column, changed, onField, onUnit,
         <AppText variant="bodyStrong" style={styles.header} numberOfLines={2}>
           {header}
         </AppText>
-        <ConfidenceBadge confidence={suggestion.confidence} changed={changed} />
+        <ConfidenceBadge confidence={suggestion.confidence} chosenBy={note.badge} />
       </View>
       <AppText variant="caption" tone="muted" numberOfLines={1}>
         {suggestion.samples.length ? suggestion.samples.join('  ·  ') : 'No values in the first rows'}
@@ -57,7 +58,7 @@ export function MappingColumnRow({ suggestion, column, changed, onField, onUnit,
         ) : null}
       </View>
       <AppText variant="caption" tone={low ? 'default' : 'muted'}>
-        {changed ? `Set by you to ${TARGET_LABELS[column.field]}. Suggested: ${TARGET_LABELS[suggestion.field]} (${suggestion.reason})` : suggestion.reason}
+        {note.text}
       </AppText>
     </View>
   );

@@ -15,7 +15,7 @@ export function PreviewShots({ shots, total, units }: PreviewShotsProps) {
   const columns = previewColumns(shots, units);
   if (shots.length === 0) return <AppText tone="muted">No row of this file converts to a shot with this mapping.</AppText>;
   const cell = (text: string, width: number, key: string, strong = false, right = false) => (
-    <AppText key={key} variant={strong ? 'label' : 'caption'} numberOfLines={strong ? 2 : 1} style={[styles.cell, { width }, right && styles.right]}>
+    <AppText key={key} variant={strong ? 'label' : 'caption'} numberOfLines={strong ? 3 : 1} style={[styles.cell, { width }, right && styles.right]}>
       {text}
     </AppText>
   );

@@ -170,3 +170,25 @@ export function recipeFromOverrides(overrides: ColumnOverrides): Recipe | undefi
   if (columns.length === 0) return undefined;
   return { columns: Object.fromEntries(columns.map(([h, c]) => [h, { ...c }])) };
 }
+
+/**
+ * A stored recipe with the fitter's overrides on top (the re-map of a stored file sends the whole
+ * mapping). A column of the base that held a field an override now gives to another column is set
+ * to Ignore: the server refuses a recipe that maps two columns to one field. Build and Ignore may
+ * be held by several columns. Without a base, the overrides alone (or undefined when none).
+ * O(columns).
+ * @example recipeWithOverrides({ columns: { A: { field: 'carry', unit: 'm' }, B: { field: 'total', unit: 'm' } } }, { B: { field: 'carry', unit: 'm' } })
+ * // => { columns: { A: { field: 'ignore' }, B: { field: 'carry', unit: 'm' } } }
+ */
+export function recipeWithOverrides(base: Recipe | undefined, overrides: ColumnOverrides): Recipe | undefined {
+  if (!base) return recipeFromOverrides(overrides);
+  const claimed = new Set<ColumnTarget>();
+  for (const c of Object.values(overrides)) if (c.field !== 'build' && c.field !== 'ignore') claimed.add(c.field);
+  const columns: Record<string, RecipeColumn> = {};
+  for (const [header, column] of Object.entries(base.columns)) {
+    const own = overrides[header];
+    columns[header] = own ? { ...own } : claimed.has(column.field) ? { field: 'ignore' } : { ...column };
+  }
+  for (const [header, column] of Object.entries(overrides)) if (!(header in columns)) columns[header] = { ...column };
+  return { ...base, columns };
+}

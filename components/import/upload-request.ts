@@ -12,7 +12,8 @@ export type UploadFile = Blob & { name: string };
 /** Upload progress: 0..1 of the bytes sent, or null when the browser cannot tell. */
 export type UploadProgress = (fraction: number | null) => void;
 
-function apiErrorOf(status: number, text: string): ApiError {
+/** The ApiError of a non-2xx answer's text (the API's error body, or a general one). */
+export function apiErrorOf(status: number, text: string): ApiError {
   let json: unknown;
   try {
     json = text ? JSON.parse(text) : undefined;

@@ -1,8 +1,9 @@
 import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { Shot } from '@/analysis/fields';
 import type { ColumnSuggestion, Recipe, SniffResult } from '@/analysis/import';
-import type { BayFile, ImportOptions, ImportReport } from '@/server/schemas';
+import type { BayFile, BuildAssignment, ImportOptions, ImportReport } from '@/server/schemas';
 import { apiRequest, api } from '../api-client';
+import { downloadText } from '../import/text-request';
 import { uploadBayFile, type UploadFile, type UploadProgress } from '../import/upload-request';
 import { fittingKeys } from './fittings';
 import { recipeKeys } from './recipes';
@@ -27,7 +28,14 @@ export const fileKeyOf = (file: UploadFile & { lastModified?: number }) => `${fi
 // analysis together, and one invalidation of ['fittings'] refreshes them all.
 export const bayFileKeys = {
   all: [...fittingKeys.all, 'bay-files'] as const,
-  list: (fittingId: string) => [...bayFileKeys.all, fittingId] as const,
+  list: (fittingId: string) => [...bayFileKeys.all, 'list', fittingId] as const,
+  detail: (id: string) => [...bayFileKeys.all, 'detail', id] as const,
+};
+
+// The stored text never changes (a re-map keeps it), so it is not under ['fittings'] either.
+export const bayFileTextKeys = {
+  all: ['bay-file-texts'] as const,
+  text: (id: string) => [...bayFileTextKeys.all, id] as const,
 };
 
 // Previews are not under ['fittings']: a commit must not re-run the preview of the file it stored.
@@ -37,8 +45,15 @@ export const bayFilePreviewKeys = {
 };
 
 const fittingPath = (fittingId: string) => `/fittings/${encodeURIComponent(fittingId)}/bay-files`;
+const filePath = (id: string) => `/bay-files/${encodeURIComponent(id)}`;
+
+/** What PUT /api/bay-files/:id/recipe takes: the whole mapping, and how builds are given. */
+export type RemapBody = { recipe: Recipe; builds: BuildAssignment };
 
 export const getBayFiles = (fittingId: string) => api.get<BayFile[]>(fittingPath(fittingId));
+export const getBayFile = (id: string) => api.get<BayFile>(filePath(id));
+export const getBayFileText = (id: string, signal?: AbortSignal) => downloadText(`${filePath(id)}/raw`, signal);
+export const remapBayFile = (id: string, body: RemapBody) => apiRequest<BayFile>('PUT', `${filePath(id)}/recipe`, { body });
 
 export const previewBayFile = (fittingId: string, file: UploadFile, options: ImportOptions, signal?: AbortSignal) =>
   uploadBayFile<BayFilePreview>(`${fittingPath(fittingId)}/preview`, file, options, undefined, signal);
@@ -48,6 +63,23 @@ export const bayFilesQuery = (fittingId: string) =>
 
 export function useBayFilesQuery(fittingId: string) {
   return useQuery(bayFilesQuery(fittingId));
+}
+
+export const bayFileQuery = (id: string) => queryOptions({ queryKey: bayFileKeys.detail(id), queryFn: () => getBayFile(id) });
+
+export function useBayFileQuery(id: string) {
+  return useQuery(bayFileQuery(id));
+}
+
+/** The stored text of a bay file (for its re-map); fetched once while the page is open. */
+export function useBayFileTextQuery(id: string) {
+  return useQuery({
+    queryKey: bayFileTextKeys.text(id),
+    queryFn: ({ signal }) => getBayFileText(id, signal),
+    // The stored text is never changed; only a delete ends it.
+    staleTime: Infinity,
+    gcTime: 60_000,
+  });
 }
 
 /**
@@ -83,10 +115,31 @@ export function useCommitBayFileMutation(fittingId: string, onProgress?: UploadP
   });
 }
 
+/**
+ * Applies a new mapping to a stored file: its shots are replaced on the server, so the fitting's
+ * shot count, bay files and analysis refresh (all under ['fittings']).
+ */
+export function useRemapBayFileMutation(id: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: RemapBody) => remapBayFile(id, body),
+    onSuccess: (bayFile) => {
+      queryClient.setQueryData(bayFileKeys.detail(id), bayFile);
+      return queryClient.invalidateQueries({ queryKey: fittingKeys.all });
+    },
+  });
+}
+
+/** Deletes a bay file with its shots (staff only); the fitting's counts and analysis refresh. */
 export function useDeleteBayFileMutation() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (bayFileId: string) => apiRequest<void>('DELETE', `/bay-files/${encodeURIComponent(bayFileId)}`),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: fittingKeys.all }),
+    mutationFn: (bayFileId: string) => apiRequest<void>('DELETE', filePath(bayFileId)),
+    onSuccess: (_nothing, bayFileId) => {
+      // Gone for good: drop what was cached of it rather than refetch a 404.
+      queryClient.removeQueries({ queryKey: bayFileKeys.detail(bayFileId) });
+      queryClient.removeQueries({ queryKey: bayFileTextKeys.text(bayFileId) });
+      return queryClient.invalidateQueries({ queryKey: fittingKeys.all });
+    },
   });
 }

@@ -56,13 +56,26 @@ function countLines(text: string): number {
   return n;
 }
 
+/**
+ * A saved recipe with the fitter's edits on top. A field an edited column takes is given up by
+ * the saved column that held it (one column per field), as the mapping step shows it.
+ */
+export function overlayRecipe(base: Recipe, edits: Recipe): Recipe {
+  const taken = new Set(Object.values(edits.columns).map((c) => c.field).filter((f) => f !== 'build' && f !== 'ignore'));
+  const columns: Recipe['columns'] = {};
+  for (const [header, column] of Object.entries(base.columns)) {
+    columns[header] = !(header in edits.columns) && taken.has(column.field) ? { field: 'ignore' } : column;
+  }
+  return { ...base, ...edits, columns: { ...columns, ...edits.columns } };
+}
+
 async function recipeOf(actor: Actor, options: ParsedImportOptions): Promise<Recipe | undefined> {
   if (!options.recipeId) return options.recipe;
   const saved = await RecipeModel.findOne({ where: { id: options.recipeId, shopId: actor.shopId } });
   if (!saved) throw notFound('That recipe');
   const base = recipeSchema.parse(JSON.parse(saved.recipe));
   if (!options.recipe) return base;
-  return { ...base, ...options.recipe, columns: { ...base.columns, ...options.recipe.columns } };
+  return overlayRecipe(base, options.recipe);
 }
 
 function buildOptions(builds: BuildAssignment): { defaultBuild: string | null; buildByClub?: Record<string, string>; forceBuild?: string } {

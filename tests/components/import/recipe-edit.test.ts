@@ -1,5 +1,7 @@
+import fs from 'node:fs';
+import path from 'node:path';
 import { SIDE_FIELDS } from '@/analysis/fields';
-import { recipeSchema, type ColumnSuggestion } from '@/analysis/import';
+import { importBayFile, recipeSchema, type ColumnSuggestion } from '@/analysis/import';
 import { findUnit } from '@/analysis/units';
 import {
   columnWithField,
@@ -7,6 +9,7 @@ import {
   effectiveColumn,
   isSideTarget,
   recipeFromOverrides,
+  recipeWithOverrides,
   setColumnField,
   setColumnSide,
   setColumnUnit,
@@ -157,5 +160,51 @@ describe('confidenceLevel', () => {
     expect(confidenceLevel(0.8)).toBe('high');
     expect(confidenceLevel(0.6)).toBe('medium');
     expect(confidenceLevel(0.49)).toBe('low');
+  });
+});
+
+describe('recipeWithOverrides', () => {
+  // An invented bay file (fixtures/bay-files/club-names.csv): mph, yards, "R 4.5" sides, a build column.
+  const text = fs.readFileSync(path.resolve(__dirname, '../../../fixtures/bay-files/club-names.csv'), 'utf8');
+  const stored = importBayFile(text).recipe;
+
+  it('recipeWithOverrides, no base, is the overrides alone', () => {
+    expect(recipeWithOverrides(undefined, {})).toBeUndefined();
+    expect(recipeWithOverrides(undefined, { A: { field: 'ignore' } })).toEqual({ columns: { A: { field: 'ignore' } } });
+  });
+
+  it('recipeWithOverrides, a stored recipe and one column set to Ignore, keeps every other column and the file format', () => {
+    const out = recipeWithOverrides(stored, { 'Carry yds': { field: 'ignore' } })!;
+    expect(out.delimiter).toBe(stored.delimiter);
+    expect(out.headerRow).toBe(stored.headerRow);
+    expect(out.columns['Carry yds']).toEqual({ field: 'ignore' });
+    expect(out.columns['Ball Speed mph']).toEqual(stored.columns['Ball Speed mph']);
+    expect(Object.keys(out.columns)).toEqual(Object.keys(stored.columns));
+  });
+
+  it('recipeWithOverrides, an override taking a field a stored column holds, ignores that column so the importer accepts it', () => {
+    // Without the rule the importer refuses the recipe: "maps both … to ballSpeed" (BAD_RECIPE).
+    const overrides = { 'Club Speed mph': { field: 'ballSpeed' as const, unit: 'mph' } };
+    const naive = { ...stored, columns: { ...stored.columns, ...overrides } };
+    expect(() => importBayFile(text, { recipe: naive })).toThrow(/maps both/);
+    const out = recipeWithOverrides(stored, overrides)!;
+    expect(out.columns['Ball Speed mph']).toEqual({ field: 'ignore' });
+    const shot = importBayFile(text, { recipe: out }).shots[0];
+    // The first row's club speed, 104.5 mph, now read as ball speed: 1 mph = 0.44704 m/s exactly
+    // (NIST SP 811, Guide for the Use of the SI, 2008, App. B.8).
+    expect(shot.values.ballSpeed).toBeCloseTo(104.5 * 0.44704, 6);
+    expect(shot.values.clubSpeed).toBeUndefined();
+  });
+
+  it('recipeWithOverrides, a second build column, keeps both build columns', () => {
+    const out = recipeWithOverrides(stored, { 'Club Speed mph': { field: 'build' } })!;
+    expect(out.columns.Build).toEqual({ field: 'build' });
+    expect(recipeSchema.safeParse(out).success).toBe(true);
+  });
+
+  it('recipeWithOverrides, the base, is left unchanged', () => {
+    const copy = JSON.parse(JSON.stringify(stored));
+    recipeWithOverrides(stored, { 'Carry yds': { field: 'total', unit: 'yd' } });
+    expect(stored).toEqual(copy);
   });
 });

@@ -226,3 +226,22 @@ describe('bay-file access', () => {
     expect((await agent.get('/api/recipes')).status).toBe(403);
   });
 });
+
+describe('saved recipes with edits', () => {
+  it('a preview with a saved recipe and an edit that takes a field from a saved column gives that column up', async () => {
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const saved = await agent.post('/api/recipes').set(APP_HEADER).send({
+      name: `Two carries ${Date.now()}`,
+      recipe: { columns: { 'Carry (yds)': { field: 'carry', unit: 'yd' }, 'Side (yds)': { field: 'offline', unit: 'yd', side: 'suffix-LR' } } },
+    });
+    expect(saved.status).toBe(201);
+    const csv = 'Club,Carry (yds),Carry (m),Side (yds)\n7 Iron,160,150,2 L\n7 Iron,162,151,1 R\n7 Iron,158,149,0.5 L\n';
+    const res = await upload(agent, `/api/fittings/${world.fitting.id}/bay-files/preview`, csv, {
+      recipeId: saved.body.id,
+      recipe: { columns: { 'Carry (m)': { field: 'carry', unit: 'm' } } },
+    });
+    expect(res.status).toBe(200);
+    expect(res.body.recipe.columns['Carry (yds)'].field).toBe('ignore');
+    expect(res.body.shots[0].values.carry).toBe(150);
+  });
+});
