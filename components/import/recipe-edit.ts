@@ -2,7 +2,7 @@
  * The mapping step's edits, as pure functions: what a column may be set to, which units and side
  * notations fit it, and the column overrides sent to the server as `options.recipe.columns`.
  */
-import { SIDE_FIELDS, type ShotField } from '@/analysis/fields';
+import { FIELD_LABELS, SIDE_FIELDS, type ShotField } from '@/analysis/fields';
 import { COLUMN_TARGETS, SIDE_NOTATIONS, type ColumnSuggestion, type ColumnTarget, type Recipe, type RecipeColumn, type SideNotation } from '@/analysis/import';
 import { CANONICAL_UNIT, fieldDimension, findUnit, UNITS } from '@/analysis/units';
 
@@ -14,27 +14,7 @@ export const TARGET_LABELS: Readonly<Record<ColumnTarget, string>> = {
   club: 'Club',
   build: 'Build',
   ignore: 'Ignore',
-  clubSpeed: 'Club speed',
-  ballSpeed: 'Ball speed',
-  smashFactor: 'Smash factor',
-  launchAngle: 'Launch angle',
-  launchDirection: 'Launch direction',
-  spinRate: 'Spin rate',
-  backSpin: 'Back spin',
-  sideSpin: 'Side spin',
-  spinAxis: 'Spin axis',
-  attackAngle: 'Attack angle',
-  clubPath: 'Club path',
-  faceAngle: 'Face angle',
-  faceToPath: 'Face to path',
-  dynamicLoft: 'Dynamic loft',
-  spinLoft: 'Spin loft',
-  carry: 'Carry',
-  total: 'Total',
-  offline: 'Offline',
-  apexHeight: 'Apex height',
-  descentAngle: 'Descent angle',
-  flightTime: 'Flight time',
+  ...FIELD_LABELS,
 };
 
 /** The targets in picker order: club, build, the shot fields, ignore last. */
