@@ -61,7 +61,7 @@ function countLines(text: string): number {
  * the saved column that held it (one column per field), as the mapping step shows it.
  */
 export function overlayRecipe(base: Recipe, edits: Recipe): Recipe {
-  const taken = new Set(Object.values(edits.columns).map((c) => c.field).filter((f) => f !== 'build' && f !== 'ignore'));
+  const taken = new Set<string>(Object.values(edits.columns).map((c) => c.field).filter((f) => f !== 'build' && f !== 'ignore'));
   const columns: Recipe['columns'] = {};
   for (const [header, column] of Object.entries(base.columns)) {
     columns[header] = !(header in edits.columns) && taken.has(column.field) ? { field: 'ignore' } : column;
