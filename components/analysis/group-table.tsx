@@ -33,7 +33,7 @@ export function GroupTable({ groups, units, selectedClub }: GroupTableProps) {
     <ScrollView horizontal showsHorizontalScrollIndicator accessibilityLabel="Groups table">
       <View style={styles.table}>
         <View style={[styles.row, styles.head]}>
-          <AppText variant="label" style={[styles.name, styles.headText]}>Club · build</AppText>
+          <AppText variant="label" style={[styles.name, styles.headText, styles.left]}>Club · build</AppText>
           <AppText variant="label" style={[styles.num, styles.headText]}>Shots</AppText>
           {COLUMNS.map((c) => (
             <AppText key={c.field} variant="label" style={[styles.num, styles.headText]}>
@@ -77,4 +77,5 @@ const styles = StyleSheet.create({
   name: { width: 150, paddingHorizontal: space.sm, textAlign: 'left' },
   num: { width: 78, paddingHorizontal: space.sm, textAlign: 'right' },
   right: { textAlign: 'right' },
+  left: { textAlign: 'left' },
 });
