@@ -1,7 +1,6 @@
 import fs from 'node:fs';
 import path from 'node:path';
-import type { Browser } from 'playwright-core';
-import { launchBrowser, PHONE, serveDemo, type ServedApp } from '../support/browser';
+import { PHONE, signInAs, useDemoInBrowser } from '../support/browser';
 
 jest.setTimeout(180_000);
 
@@ -12,30 +11,14 @@ const expected = JSON.parse(fs.readFileSync(FIXTURE.replace(/\.csv$/, '.expected
   counts: { rows: number; shots: number; rejected: number; skipped: number };
 };
 
-let served: ServedApp;
-let browser: Browser;
-beforeAll(async () => {
-  if (!fs.existsSync(path.resolve(__dirname, '../../dist/index.html'))) {
-    throw new Error('No web build in dist/: run npm test (it builds), or npm run build:web');
-  }
-  served = await serveDemo();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await served?.close();
-});
+const demo = useDemoInBrowser();
 
 describe('bay-file import in the browser', () => {
   it('a demo fitter at phone size imports a file with one column corrected and sees the shot count', async () => {
-    const page = await browser.newPage({ viewport: PHONE });
-    await page.goto(served.url);
-    await page.getByLabel('E-mail').fill('oskar@larchmere.example');
-    await page.getByLabel('Password').fill('ovalyard-demo');
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'), { timeout: 30_000 });
+    const page = await demo.browser.newPage({ viewport: PHONE });
+    await signInAs(page, demo.url, 'oskar@larchmere.example');
 
-    await page.goto(`${served.url}/fittings`);
+    await page.goto(`${demo.url}/fittings`);
     await page.getByRole('link', { name: /Fitting of Nell Tarrant/ }).first().click();
     await page.getByRole('button', { name: 'Import a bay file' }).click();
 

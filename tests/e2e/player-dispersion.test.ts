@@ -1,26 +1,13 @@
-import type { Browser } from 'playwright-core';
-import { launchBrowser, PHONE, serveDemo, type ServedApp } from '../support/browser';
+import { PHONE, signInAs, useDemoInBrowser } from '../support/browser';
 
 jest.setTimeout(120_000);
 
-let served: ServedApp;
-let browser: Browser;
-beforeAll(async () => {
-  served = await serveDemo();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await served?.close();
-});
+const demo = useDemoInBrowser();
 
 describe('a player on a phone', () => {
   it('the demo player sees their fitting’s dispersion plot and cannot decide on strays', async () => {
-    const page = await browser.newPage({ viewport: PHONE });
-    await page.goto(served.url);
-    await page.getByLabel('E-mail').fill('nell.tarrant@example.net');
-    await page.getByLabel('Password').fill('ovalyard-demo');
-    await page.getByRole('button', { name: 'Sign in' }).click();
+    const page = await demo.browser.newPage({ viewport: PHONE });
+    await signInAs(page, demo.url, 'nell.tarrant@example.net');
     await page.getByText('My fittings').first().waitFor({ timeout: 30_000 });
     await page.getByText('Indoor bay').first().click();
     // The plot's accessible summary (components/charts/oval-plot-geometry.ts ovalPlotSummary).

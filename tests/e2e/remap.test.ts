@@ -1,34 +1,16 @@
-import fs from 'node:fs';
-import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { launchBrowser, PHONE, serveDemo, type ServedApp } from '../support/browser';
+import type { Page } from 'playwright-core';
+import { PHONE, signInAs, useDemoInBrowser } from '../support/browser';
 
 jest.setTimeout(180_000);
 
 // The demo's invented bay file of Nell Tarrant's fitting (fixtures/demo/nell-driver-and-7-iron.csv).
 const FILE = 'nell-driver-and-7-iron.csv';
 
-let served: ServedApp;
-let browser: Browser;
-beforeAll(async () => {
-  if (!fs.existsSync(path.resolve(__dirname, '../../dist/index.html'))) {
-    throw new Error('No web build in dist/: run npm test (it builds), or npm run build:web');
-  }
-  served = await serveDemo();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await served?.close();
-});
+const demo = useDemoInBrowser();
 
 async function signInAndOpenNell(page: Page): Promise<void> {
-  await page.goto(served.url);
-  await page.getByLabel('E-mail').fill('oskar@larchmere.example');
-  await page.getByLabel('Password').fill('ovalyard-demo');
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'), { timeout: 30_000 });
-  await page.goto(`${served.url}/fittings`);
+  await signInAs(page, demo.url, 'oskar@larchmere.example');
+  await page.goto(`${demo.url}/fittings`);
   await page.getByRole('link', { name: /Fitting of Nell Tarrant/ }).first().click();
   await page.getByText(FILE).waitFor({ timeout: 30_000 });
 }
@@ -41,7 +23,7 @@ async function listedShots(page: Page): Promise<number> {
 
 describe('re-mapping and deleting a stored bay file in the browser', () => {
   it('a demo fitter at phone size ignores one column of the stored file, applies it, and then deletes the file', async () => {
-    const page = await browser.newPage({ viewport: PHONE });
+    const page = await demo.browser.newPage({ viewport: PHONE });
     await signInAndOpenNell(page);
     const before = await listedShots(page);
     expect(before).toBeGreaterThan(0);

@@ -1,28 +1,13 @@
-import fs from 'node:fs';
-import path from 'node:path';
-import type { Browser } from 'playwright-core';
-import { launchBrowser, PHONE, serveDemo, type ServedApp } from '../support/browser';
+import { PHONE, useDemoInBrowser } from '../support/browser';
 
 jest.setTimeout(120_000);
 
-let served: ServedApp;
-let browser: Browser;
-beforeAll(async () => {
-  if (!fs.existsSync(path.resolve(__dirname, '../../dist/index.html'))) {
-    throw new Error('No web build in dist/: run npm test (it builds), or npm run build:web');
-  }
-  served = await serveDemo();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await served?.close();
-});
+const demo = useDemoInBrowser();
 
 describe('sign-in in the browser', () => {
   it('a demo fitter signing in at phone size sees the players list', async () => {
-    const page = await browser.newPage({ viewport: PHONE });
-    await page.goto(served.url);
+    const page = await demo.browser.newPage({ viewport: PHONE });
+    await page.goto(demo.url);
     await page.getByLabel('E-mail').fill('oskar@larchmere.example');
     await page.getByLabel('Password').fill('ovalyard-demo');
     await page.getByRole('button', { name: 'Sign in' }).click();
@@ -32,8 +17,8 @@ describe('sign-in in the browser', () => {
   });
 
   it('a wrong password shows the error in the page and stays on sign-in', async () => {
-    const page = await browser.newPage({ viewport: PHONE });
-    await page.goto(served.url);
+    const page = await demo.browser.newPage({ viewport: PHONE });
+    await page.goto(demo.url);
     await page.getByLabel('E-mail').fill('oskar@larchmere.example');
     await page.getByLabel('Password').fill('not the password');
     await page.getByRole('button', { name: 'Sign in' }).click();

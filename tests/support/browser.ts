@@ -5,7 +5,8 @@
 import { execSync } from 'node:child_process';
 import type { Server } from 'node:http';
 import path from 'node:path';
-import { chromium, type Browser } from 'playwright-core';
+import fs from 'node:fs';
+import { chromium, type Browser, type Page } from 'playwright-core';
 import { createApp } from '@/server/app';
 import { loadConfig } from '@/server/config';
 import { seedDemo } from '@/server/seed/demo';
@@ -57,4 +58,41 @@ export async function serveDemo(now = new Date()): Promise<ServedApp> {
       await drop();
     },
   };
+}
+
+/**
+ * The served demo and a browser for one test file: started before its tests, closed after.
+ * Read `.url` and `.browser` inside the tests (they are set in beforeAll).
+ */
+export function useDemoInBrowser(): { readonly url: string; readonly browser: Browser } {
+  let served: ServedApp | undefined;
+  let browser: Browser | undefined;
+  beforeAll(async () => {
+    if (!fs.existsSync(path.resolve(__dirname, '../../dist/index.html'))) {
+      throw new Error('No web build in dist/: run npm test (it builds), or npm run build:web');
+    }
+    served = await serveDemo();
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await served?.close();
+  });
+  return {
+    get url() {
+      return served!.url;
+    },
+    get browser() {
+      return browser!;
+    },
+  };
+}
+
+/** Signs in through the sign-in screen and waits to leave it. */
+export async function signInAs(page: Page, baseUrl: string, email: string, password = 'ovalyard-demo'): Promise<void> {
+  await page.goto(baseUrl);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'), { timeout: 30_000 });
 }
