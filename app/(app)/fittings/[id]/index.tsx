@@ -33,8 +33,13 @@ export default function FittingScreen() {
     <Screen>
       <Stack.Screen options={{ title: `${fitting.playerName} · ${formatDate(fitting.date)}` }} />
       <BaySafetyNote />
+      {/* The shots come first: they are what the fitter and the player open the page for. */}
+      <FittingBayFiles fitting={fitting} />
+      <Section title="Shots and analysis">
+        <FittingAnalysisArea fitting={fitting} />
+      </Section>
       <Section
-        title="Details"
+        title="Details and conditions"
         action={
           isStaff(me.role) ? (
             <Button
@@ -47,10 +52,6 @@ export default function FittingScreen() {
         }
       >
         <FittingDetails fitting={fitting} />
-      </Section>
-      <FittingBayFiles fitting={fitting} />
-      <Section title="Shots and analysis">
-        <FittingAnalysisArea fitting={fitting} />
       </Section>
     </Screen>
   );
