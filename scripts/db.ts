@@ -1,4 +1,5 @@
 /** `npm run db:stop` / `db:start`: the private MariaDB of `npm start`, by hand. */
+import fs from 'node:fs';
 import path from 'node:path';
 import { startPrivateMariadb, stopPrivateMariadb } from './lib/private-mariadb';
 
@@ -8,7 +9,6 @@ async function main(cmd: string | undefined) {
   if (cmd === 'stop') {
     console.log((await stopPrivateMariadb(path.join(DATA, 'mariadb'))) ? 'Stopped.' : 'Not running.');
   } else if (cmd === 'start') {
-    const fs = await import('node:fs');
     const pw = path.join(DATA, 'db-password');
     const password = process.env.DB_PASSWORD ?? (fs.existsSync(pw) ? fs.readFileSync(pw, 'utf8').trim() : 'ovalyard-dev');
     const db = await startPrivateMariadb({ dataDir: path.join(DATA, 'mariadb'), port: Number(process.env.DB_PORT ?? 3307), database: 'ovalyard', user: 'ovalyard', password, log: console.log });

@@ -31,7 +31,7 @@ export function authRouter(config: Config): Router {
   });
 
   router.post('/auth/sign-out-everywhere', authenticate(config), async (_req, res) => {
-    await signOutEverywhere(null, actorOf(res));
+    await signOutEverywhere(actorOf(res));
     res.clearCookie(SESSION_COOKIE, cookie);
     res.status(204).end();
   });

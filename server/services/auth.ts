@@ -1,4 +1,3 @@
-import type { Sequelize } from 'sequelize';
 import { HttpError } from '../errors';
 import { Player, Shop, User } from '../models';
 import type { Me, SignInBody, UnitsPreference } from '../schemas';
@@ -52,7 +51,7 @@ export async function updateUnits(actor: Actor, units: UnitsPreference): Promise
 }
 
 /** Ends every session of a user (all devices). */
-export async function signOutEverywhere(_sequelize: Sequelize | null, actor: Actor): Promise<void> {
+export async function signOutEverywhere(actor: Actor): Promise<void> {
   const user = await User.findByPk(actor.id);
   if (user) await user.increment('tokenVersion');
 }
