@@ -36,10 +36,13 @@ export async function findWritableFitting(actor: Actor, fittingId: string): Prom
 }
 
 /**
- * Decodes an upload as text: UTF-8 (BOM dropped), or Windows-1252 when it is not valid UTF-8.
- * A file with NUL bytes is not text.
+ * Decodes an upload as text: UTF-16 with a byte-order mark, UTF-8 (BOM dropped), or
+ * Windows-1252 when it is not valid UTF-8. Any other file with NUL bytes is not text.
  */
 export function decodeUpload(buffer: Buffer): string {
+  // Some spreadsheet programs save "Unicode text" as UTF-16 with a byte-order mark.
+  if (buffer.length >= 2 && buffer[0] === 0xff && buffer[1] === 0xfe) return new TextDecoder('utf-16le').decode(buffer.subarray(2));
+  if (buffer.length >= 2 && buffer[0] === 0xfe && buffer[1] === 0xff) return new TextDecoder('utf-16be').decode(buffer.subarray(2));
   if (buffer.includes(0)) throw new HttpError(400, 'NOT_TEXT', 'This file is not a text (CSV) file. Export the session as CSV and try again.');
   let text: string;
   try {

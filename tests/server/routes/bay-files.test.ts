@@ -245,3 +245,19 @@ describe('saved recipes with edits', () => {
     expect(res.body.shots[0].values.carry).toBe(150);
   });
 });
+
+describe('bay-file encodings', () => {
+  it('a UTF-16 file with a byte-order mark and a Windows-1252 file both preview', async () => {
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const csv = sessionCsv(4);
+    const utf16 = Buffer.concat([Buffer.from([0xff, 0xfe]), Buffer.from(csv, 'utf16le')]);
+    const a = await upload(agent, `/api/fittings/${world.fitting.id}/bay-files/preview`, utf16);
+    expect(a.status).toBe(200);
+    expect(a.body.report.imported).toBe(4);
+    const latin = Buffer.from(csv.replace('Launch (deg)', 'Launch (\u00b0)'), 'latin1'); // ° as the single byte 0xB0
+    const b = await upload(agent, `/api/fittings/${world.fitting.id}/bay-files/preview`, latin);
+    expect(b.status).toBe(200);
+    expect(b.body.report.imported).toBe(4);
+    expect(b.body.suggestions.find((s: { header: string }) => s.header === 'Launch (°)').field).toBe('launchAngle');
+  });
+});
