@@ -12,7 +12,7 @@ import { deriveSlotsInPlace, derivedFields } from './derive-fields';
 import { newSlots, SLOT, SLOT_COUNT, valuesFromSlots } from './shot-slots';
 import { parseHeader } from './header-match';
 import { ImportError, type ImportErrorCode } from './import-error';
-import { compileNumberReader, newCellState, quickDecimal, type DecimalMark, type NumberReader } from './number-format';
+import { compileNumberReader, newCellState, quickDecimal, quickDecimalRange, type DecimalMark, type NumberReader } from './number-format';
 import { recipeSchema, type ColumnTarget, type Recipe, type RecipeColumn, type SideNotation } from './recipe';
 import { isBlankRow, isSummaryRow } from './row-kinds';
 import { checkLimit, checkShotValues, SHOT_LIMITS } from './shot-limits';
@@ -247,17 +247,25 @@ export function importBayFile(input: string, options: ImportOptions = {}): Impor
   const toValues = valuesFromSlots;
   const slotCount = SLOT_COUNT;
   const fast = quickDecimal;
+  const fastRange = quickDecimalRange;
   const decimalCode = sniffed.decimal.charCodeAt(0);
 
-  /** One parsed row: a shot, a rejected row, or a skipped line. */
-  const onRow = (cells: string[], splitError: string | null): void => {
+  // For an unquoted file a row may come as its line and cell bounds instead of split cells:
+  // plain numbers are then read straight from the line, and only the few text cells are cut out.
+  let rowLine = '';
+  const starts = new Int32Array(width + 1);
+  const ends = new Int32Array(width + 1);
+  const cellOf = (cells: string[] | null, i: number): string => (cells !== null ? cells[i] : rowLine.slice(starts[i], ends[i]));
+
+  /** One parsed row: a shot, a rejected row, or a skipped line. `cells` null: the row is rowLine within starts/ends. */
+  const onRow = (cells: string[] | null, splitError: string | null): void => {
     const line = firstLine + ++r;
-    if ((cells.length === 1 && cells[0] === '') || blank(cells)) {
+    if (cells !== null && ((cells.length === 1 && cells[0] === '') || blank(cells))) {
       skipped.push({ line, reason: 'blank line' });
       lastBlankLine = line;
       return;
     }
-    if (summary(cells)) {
+    if (cells !== null && summary(cells)) {
       skipped.push({ line, reason: 'summary row' });
       return;
     }
@@ -266,7 +274,7 @@ export function importBayFile(input: string, options: ImportOptions = {}): Impor
       rejected.push({ row, line, reason: `the row cannot be split into cells (${splitError.toLowerCase()})` });
       return;
     }
-    if (cells.length !== width) {
+    if (cells !== null && cells.length !== width) {
       let extra = false;
       for (let i = width; i < cells.length; i++) if (cells[i].trim() !== '') extra = true;
       if (cells.length < width || extra) {
@@ -278,11 +286,11 @@ export function importBayFile(input: string, options: ImportOptions = {}): Impor
     let count = 0;
     for (let p = 0; p < nPlans; p++) {
       const plan = plans[p];
-      const cell = cells[plan.index];
+      const k = plan.index;
       // plain numbers inline (the common case); side notations and anything unusual via the reader
-      let v = plan.plain ? fast(cell, decimalCode) : NaN;
+      let v = plan.plain ? (cells !== null ? fast(cells[k], decimalCode) : fastRange(rowLine, starts[k], ends[k], decimalCode)) : NaN;
       if (v === v) state.unit = null;
-      else v = plan.read(cell, state);
+      else v = plan.read(cellOf(cells, k), state);
       if (v !== v) {
         if (state.error !== null) {
           rejected.push({ row, line, column: plan.header, reason: state.error });
@@ -310,7 +318,7 @@ export function importBayFile(input: string, options: ImportOptions = {}): Impor
     }
     let club = defaultClub;
     if (clubIndex >= 0) {
-      const name = cells[clubIndex] ?? '';
+      const name = cellOf(cells, clubIndex) ?? '';
       const cached = clubCache.get(name);
       if (cached !== undefined) club = cached;
       else if (name.trim() !== '') {
@@ -323,7 +331,7 @@ export function importBayFile(input: string, options: ImportOptions = {}): Impor
     const code = club?.code ?? '';
     let build: string | null = null;
     for (let b = 0; b < buildIndexes.length; b++) {
-      const part = (cells[buildIndexes[b]] ?? '').trim();
+      const part = (cellOf(cells, buildIndexes[b]) ?? '').trim();
       if (part !== '') build = build === null ? part : `${build} / ${part}`;
     }
     if (build === null) build = buildByClub[code] ?? defaultBuild;
@@ -358,7 +366,35 @@ export function importBayFile(input: string, options: ImportOptions = {}): Impor
     // the rows exactly as papaparse's own fast mode does, without its per-row result objects.
     const lines = data.split(sniffed.newline);
     if (lines.length > 0 && lines[lines.length - 1] === '') lines.pop();
-    for (let i = 0; i < lines.length; i++) onRow(lines[i].split(sniffed.delimiter), null);
+    const delimiter = sniffed.delimiter;
+    for (let i = 0; i < lines.length; i++) {
+      const text = lines[i];
+      // Cell bounds without cutting the cells; an unusual row (blank, summary, ragged) is split.
+      let count = 0;
+      let pos = 0;
+      for (;;) {
+        const j = text.indexOf(delimiter, pos);
+        if (count === width) {
+          count++;
+          break;
+        }
+        starts[count] = pos;
+        ends[count] = j === -1 ? text.length : j;
+        count++;
+        if (j === -1) break;
+        pos = j + 1;
+      }
+      let first = 0;
+      while (first < width && starts[first] === ends[first]) first++;
+      const firstCode = first < width ? text.charCodeAt(starts[first]) : 32;
+      const letter = ((firstCode | 32) >= 97 && (firstCode | 32) <= 122) || firstCode > 127;
+      const plainRow =
+        count === width && firstCode !== 32 && firstCode !== 9 && (!letter || !summary([text.slice(starts[first], ends[first])]));
+      if (plainRow) {
+        rowLine = text;
+        onRow(null, null);
+      } else onRow(text.split(delimiter), null);
+    }
     if (/(\r\n|\n|\r)$/.test(data)) onRow([''], null); // as papaparse: the final break ends in an empty line
   } else {
     Papa.parse<string[]>(data, {
