@@ -180,10 +180,16 @@ function toDto(b: BayFile): BayFileDto {
   };
 }
 
-/** Creates a build record for every (club, label) the shots name that the fitting lacks. */
+/**
+ * Creates a build record for every (club, label) the shots name that the fitting lacks; shots
+ * with no build name get one with the empty label, so every group can carry its specs (loft…).
+ */
 async function ensureBuilds(fittingId: string, shots: readonly Shot[], transaction: Transaction): Promise<void> {
   const wanted = new Map<string, { club: string; label: string }>();
-  for (const s of shots) if (s.build) wanted.set(`${s.club}\u0000${s.build}`, { club: s.club, label: s.build.slice(0, 80) });
+  for (const s of shots) {
+    const label = (s.build ?? '').slice(0, 80);
+    wanted.set(`${s.club}\u0000${label}`, { club: s.club.slice(0, 40), label });
+  }
   if (wanted.size === 0) return;
   const existing = await Build.findAll({ where: { fittingId }, attributes: ['club', 'label'], transaction });
   for (const e of existing) wanted.delete(`${e.club}\u0000${e.label}`);

@@ -261,3 +261,24 @@ describe('bay-file encodings', () => {
     expect(b.body.suggestions.find((s: { header: string }) => s.header === 'Launch (°)').field).toBe('launchAngle');
   });
 });
+
+describe('builds', () => {
+  it('shots with no build name get a build record; its loft reaches the ladder', async () => {
+    const fitting = await buildFitting(world.shop, world.player, world.fitter);
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const csv = ['Club,Carry (m),Side (m),Ball Speed (m/s)', ...[0, 1, 2, 3].flatMap((i) => [`PW,${110 + i},${i - 1.5},40`, `GW,${100 + i},${1.5 - i},37`])].join('\n');
+    expect((await upload(agent, `/api/fittings/${fitting.id}/bay-files`, csv)).status).toBe(201);
+    const builds = (await agent.get(`/api/fittings/${fitting.id}/builds`)).body as { id: string; club: string; label: string }[];
+    expect(builds.map((b) => `${b.club}|${b.label}`).sort()).toEqual(['GW|', 'PW|']);
+    for (const [club, loft] of [['PW', 46], ['GW', 52]] as const) {
+      const id = builds.find((b) => b.club === club)!.id;
+      expect((await agent.patch(`/api/builds/${id}`).set(APP_HEADER).send({ loftDeg: loft })).status).toBe(200);
+    }
+    const ladder = (await agent.get(`/api/fittings/${fitting.id}/analysis`)).body.analysis.ladder;
+    expect(ladder[0]).toMatchObject({ club: 'PW', loftDeg: 46, loftStepToNextDeg: 6 });
+    const rival2 = await signedInAgent(ctx.app, rival.fitter.email);
+    expect((await rival2.patch(`/api/builds/${builds[0].id}`).set(APP_HEADER).send({ loftDeg: 40 })).status).toBe(404);
+    const player = await signedInAgent(ctx.app, world.playerUser.email);
+    expect((await player.patch(`/api/builds/${builds[0].id}`).set(APP_HEADER).send({ loftDeg: 40 })).status).toBe(403);
+  });
+});
