@@ -1,8 +1,6 @@
-import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { Fitting, FittingBody } from '@/server/schemas';
-import { errorMessage, fieldErrorsFromApi } from '../api-client';
-import type { FieldErrors } from '../forms';
+import { errorMessage } from '../api-client';
 import { AppText } from '../ui/app-text';
 import { Button } from '../ui/button';
 import { ChoiceField } from '../ui/choice-field';
@@ -13,6 +11,7 @@ import { TextField } from '../ui/text-field';
 import { space } from '../theme';
 import { fittingFormText, parseFittingForm, type FittingFormText } from './fitting-form-values';
 import { PlayerPicker } from './player-picker';
+import { useTextForm } from '../use-text-form';
 
 type FittingFormProps = {
   fitting?: Fitting;
@@ -32,20 +31,7 @@ const VENUES = [
 
 /** A fitting's player, date, venue and conditions; checked with the shared schema before sending. */
 export function FittingForm({ fitting, playerId, submitTitle, busy, error, onSubmit, onCancel }: FittingFormProps) {
-  const [text, setText] = useState<FittingFormText>(() => fittingFormText(fitting, { playerId }));
-  const [errors, setErrors] = useState<FieldErrors>({});
-  const set = <K extends keyof FittingFormText>(key: K) => (value: FittingFormText[K]) => setText((t) => ({ ...t, [key]: value }));
-  const shown = { ...fieldErrorsFromApi(error), ...errors };
-
-  const submit = () => {
-    const result = parseFittingForm(text);
-    if (!result.ok) {
-      setErrors(result.errors);
-      return;
-    }
-    setErrors({});
-    onSubmit(result.body);
-  };
+  const { text, set, errors, shown, submit } = useTextForm(() => fittingFormText(fitting, { playerId }), parseFittingForm, onSubmit, error);
 
   return (
     <View style={styles.form}>

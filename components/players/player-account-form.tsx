@@ -1,14 +1,13 @@
-import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { playerAccountBodySchema, type Player } from '@/server/schemas';
-import { ApiError, errorMessage, fieldErrorsFromApi } from '../api-client';
-import { fieldErrorsFromZod, type FieldErrors } from '../forms';
+import { ApiError, errorMessage } from '../api-client';
 import { useGivePlayerAccountMutation } from '../queries/players';
 import { AppText } from '../ui/app-text';
 import { Button } from '../ui/button';
 import { Notice } from '../ui/notice';
 import { TextField } from '../ui/text-field';
 import { space } from '../theme';
+import { parseWith, useTextForm } from '../use-text-form';
 
 type PlayerAccountFormProps = { player: Player; onDone: () => void; onCancel: () => void };
 
@@ -20,23 +19,15 @@ function bannerFor(error: unknown): string {
 
 /** Gives a player their own sign-in: an e-mail and a first password to hand over. */
 export function PlayerAccountForm({ player, onDone, onCancel }: PlayerAccountFormProps) {
-  const [email, setEmail] = useState(player.email ?? '');
-  const [password, setPassword] = useState('');
-  const [errors, setErrors] = useState<FieldErrors>({});
   const give = useGivePlayerAccountMutation(player.id);
-  const shown = { ...fieldErrorsFromApi(give.error), ...errors };
-
-  const submit = () => {
-    const parsed = playerAccountBodySchema.safeParse({ email, password });
-    if (!parsed.success) {
-      setErrors(fieldErrorsFromZod(parsed.error));
-      return;
-    }
-    setErrors({});
-    // mutateAsync, not mutate's callbacks: the saved player (hasAccount) may unmount this form
-    // before per-call callbacks would run. A failure shows through give.error.
-    give.mutateAsync(parsed.data).then(onDone, () => undefined);
-  };
+  // mutateAsync, not mutate's callbacks: the saved player (hasAccount) may unmount this form
+  // before per-call callbacks would run. A failure shows through give.error.
+  const { text, set, shown, submit } = useTextForm(
+    () => ({ email: player.email ?? '', password: '' }),
+    parseWith(playerAccountBodySchema),
+    (body) => void give.mutateAsync(body).then(onDone, () => undefined),
+    give.error,
+  );
 
   return (
     <View style={styles.form}>
@@ -47,8 +38,8 @@ export function PlayerAccountForm({ player, onDone, onCancel }: PlayerAccountFor
       {give.error ? <Notice tone="danger">{bannerFor(give.error)}</Notice> : null}
       <TextField
         label="E-mail"
-        value={email}
-        onChangeText={setEmail}
+        value={text.email}
+        onChangeText={set('email')}
         error={shown.email}
         autoCapitalize="none"
         inputMode="email"
@@ -56,8 +47,8 @@ export function PlayerAccountForm({ player, onDone, onCancel }: PlayerAccountFor
       />
       <TextField
         label="First password"
-        value={password}
-        onChangeText={setPassword}
+        value={text.password}
+        onChangeText={set('password')}
         error={shown.password}
         hint="At least 10 characters."
         secureTextEntry

@@ -1,8 +1,6 @@
-import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { Player, PlayerBody } from '@/server/schemas';
-import { errorMessage, fieldErrorsFromApi } from '../api-client';
-import type { FieldErrors } from '../forms';
+import { errorMessage } from '../api-client';
 import { Button } from '../ui/button';
 import { ChoiceField } from '../ui/choice-field';
 import { FormRow } from '../ui/form-row';
@@ -10,6 +8,7 @@ import { Notice } from '../ui/notice';
 import { TextField } from '../ui/text-field';
 import { space } from '../theme';
 import { parsePlayerForm, playerFormText, type PlayerFormText } from './player-form-values';
+import { useTextForm } from '../use-text-form';
 
 type PlayerFormProps = {
   player?: Player;
@@ -28,20 +27,7 @@ const HANDEDNESS = [
 
 /** A player's profile: checked with the shared schema before it is sent. Lengths in cm. */
 export function PlayerForm({ player, submitTitle, busy, error, onSubmit, onCancel }: PlayerFormProps) {
-  const [text, setText] = useState<PlayerFormText>(() => playerFormText(player));
-  const [errors, setErrors] = useState<FieldErrors>({});
-  const set = <K extends keyof PlayerFormText>(key: K) => (value: PlayerFormText[K]) => setText((t) => ({ ...t, [key]: value }));
-  const shown = { ...fieldErrorsFromApi(error), ...errors };
-
-  const submit = () => {
-    const result = parsePlayerForm(text);
-    if (!result.ok) {
-      setErrors(result.errors);
-      return;
-    }
-    setErrors({});
-    onSubmit(result.body);
-  };
+  const { text, set, errors, shown, submit } = useTextForm(() => playerFormText(player), parsePlayerForm, onSubmit, error);
 
   return (
     <View style={styles.form}>

@@ -1,34 +1,25 @@
-import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { teamMemberBodySchema } from '@/server/schemas';
-import { ApiError, errorMessage, fieldErrorsFromApi } from '../api-client';
-import { fieldErrorsFromZod, type FieldErrors } from '../forms';
+import { ApiError, errorMessage } from '../api-client';
 import { useAddFitterMutation } from '../queries/team';
 import { AppText } from '../ui/app-text';
 import { Button } from '../ui/button';
 import { Notice } from '../ui/notice';
 import { TextField } from '../ui/text-field';
 import { space } from '../theme';
+import { parseWith, useTextForm } from '../use-text-form';
 
 type TeamMemberFormProps = { onDone: () => void; onCancel: () => void };
 
 /** Adds a fitter to the shop with a first password the owner hands over. */
 export function TeamMemberForm({ onDone, onCancel }: TeamMemberFormProps) {
-  const [text, setText] = useState({ name: '', email: '', password: '' });
-  const [errors, setErrors] = useState<FieldErrors>({});
   const add = useAddFitterMutation();
-  const shown = { ...fieldErrorsFromApi(add.error), ...errors };
-  const set = (key: keyof typeof text) => (value: string) => setText((t) => ({ ...t, [key]: value }));
-
-  const submit = () => {
-    const parsed = teamMemberBodySchema.safeParse(text);
-    if (!parsed.success) {
-      setErrors(fieldErrorsFromZod(parsed.error));
-      return;
-    }
-    setErrors({});
-    add.mutate(parsed.data, { onSuccess: onDone });
-  };
+  const { text, set, shown, submit } = useTextForm(
+    () => ({ name: '', email: '', password: '' }),
+    parseWith(teamMemberBodySchema),
+    (body) => add.mutate(body, { onSuccess: onDone }),
+    add.error,
+  );
 
   const banner =
     add.error instanceof ApiError && add.error.code === 'EMAIL_TAKEN'
