@@ -32,7 +32,9 @@ async function main() {
     log: console.log,
   });
   let stopping = false;
+  // Ctrl-C stops what this run started; a MariaDB that was already running stays up.
   const stopDb = async () => {
+    if (!db.startedHere) return;
     console.log('Stopping the private MariaDB…');
     await db.stop();
   };

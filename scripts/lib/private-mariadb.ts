@@ -26,6 +26,8 @@ export interface RunningMariadb {
   user: string;
   password: string;
   pid: number;
+  /** False when a server was already running on this data directory (then leave it running). */
+  startedHere: boolean;
   stop: () => Promise<void>;
 }
 
@@ -206,7 +208,7 @@ export async function startPrivateMariadb(opts: PrivateMariadbOptions): Promise<
     while (alive(pid) && Date.now() < until) await sleep(100);
     if (alive(pid)) process.kill(pid, 'SIGKILL');
   };
-  return { host: '127.0.0.1', port: opts.port, socket, database: db, user, password: opts.password, pid, stop };
+  return { host: '127.0.0.1', port: opts.port, socket, database: db, user, password: opts.password, pid, startedHere: started, stop };
 }
 
 /** Stops a private server found by its data directory, if one runs. */

@@ -1,4 +1,5 @@
 import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
+import { FittingBuilds } from '@/components/builds/fitting-builds';
 import { BaySafetyNote } from '@/components/fittings/bay-safety-note';
 import { FittingAnalysisArea } from '@/components/fittings/fitting-analysis-area';
 import { FittingBayFiles } from '@/components/fittings/fitting-bay-files';
@@ -38,6 +39,7 @@ export default function FittingScreen() {
       <Section title="Shots and analysis">
         <FittingAnalysisArea fitting={fitting} />
       </Section>
+      <FittingBuilds fitting={fitting} />
       <Section
         title="Details and conditions"
         action={
