@@ -82,7 +82,7 @@ async function main(): Promise<void> {
       await page.getByRole('link').filter({ hasText: 'Nell Tarrant' }).first().click();
       await page.waitForURL(/\/fittings\/[0-9a-f-]+$/);
       await shot(page, `${s}-21-fitting`);
-      await page.getByRole('button', { name: 'Edit' }).click();
+      await page.getByRole('button', { name: 'Edit', exact: true }).click();
       await shot(page, `${s}-22-fitting-edit`);
       await page.goto(`${BASE}/fittings/new`);
       await shot(page, `${s}-23-fitting-new`);

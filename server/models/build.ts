@@ -26,24 +26,25 @@ export class Build extends Model<InferAttributes<Build>, InferCreationAttributes
 
   static initModel(sequelize: Sequelize) {
     const text = (n: number) => ({ type: DataTypes.STRING(n), allowNull: true });
-    const num = { type: DataTypes.DOUBLE, allowNull: true };
+    // A fresh object per attribute: Sequelize writes the attribute's name into it.
+    const num = () => ({ type: DataTypes.DOUBLE, allowNull: true });
     Build.init(
       {
         id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
         club: { type: DataTypes.STRING(40), allowNull: false },
         label: { type: DataTypes.STRING(80), allowNull: false },
         head: text(120),
-        loftDeg: num,
+        loftDeg: num(),
         hoselSetting: text(60),
-        lieDeg: num,
-        lengthIn: num,
+        lieDeg: num(),
+        lengthIn: num(),
         shaft: text(120),
-        shaftWeightG: num,
+        shaftWeightG: num(),
         shaftFlex: text(20),
-        torqueDeg: num,
+        torqueDeg: num(),
         grip: text(120),
         swingWeight: text(10),
-        addedMassG: num,
+        addedMassG: num(),
         addedMassWhere: text(60),
         notes: { type: DataTypes.TEXT, allowNull: true },
         createdAt: DataTypes.DATE,

@@ -274,6 +274,11 @@ describe('builds', () => {
       const id = builds.find((b) => b.club === club)!.id;
       expect((await agent.patch(`/api/builds/${id}`).set(APP_HEADER).send({ loftDeg: loft })).status).toBe(200);
     }
+    const specs = { loftDeg: 46, lieDeg: 63.5, lengthIn: 35.5, shaftWeightG: 120, torqueDeg: 1.8, addedMassG: 2 };
+    const pw = builds.find((b) => b.club === 'PW')!.id;
+    const saved = await agent.patch(`/api/builds/${pw}`).set(APP_HEADER).send(specs);
+    expect(saved.body).toMatchObject(specs); // each number in its own column
+    expect((await agent.get(`/api/fittings/${fitting.id}/builds`)).body.find((b: { id: string }) => b.id === pw)).toMatchObject(specs);
     const ladder = (await agent.get(`/api/fittings/${fitting.id}/analysis`)).body.analysis.ladder;
     expect(ladder[0]).toMatchObject({ club: 'PW', loftDeg: 46, loftStepToNextDeg: 6 });
     const rival2 = await signedInAgent(ctx.app, rival.fitter.email);
