@@ -1,7 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import type { Sequelize } from 'sequelize';
-import { Fitting, Player, Shop, User } from '../models';
+import { Build, Fitting, Player, Shop, User } from '../models';
 import { commitBayFile } from '../services/bay-files';
 import { hashPassword } from '../services/passwords';
 
@@ -24,6 +24,8 @@ interface Scenario {
     remote: boolean;
     /** A demo bay file in fixtures/demo/, imported by the fitter. */
     bayFile?: string;
+    /** Specs of the builds its file names ('' for shots with no build name). */
+    builds?: { club: string; label: string; spec: Partial<Build['_creationAttributes']> }[];
   }[];
 }
 
@@ -90,6 +92,7 @@ export async function seedDemo(sequelize: Sequelize, now: Date, after?: DemoHook
     const actor = { id: fitter!.id, role: fitter!.role, shopId: fitter!.shopId, playerId: null, units: fitter!.units };
     const file = { name: f.bayFile, buffer: fs.readFileSync(path.join(DEMO_DIR, f.bayFile)) };
     await commitBayFile(sequelize, actor, fitting.id, file, { builds: { mode: 'column' } }, { maxRows: 200_000 });
+    for (const b of f.builds ?? []) await Build.update(b.spec, { where: { fittingId: fitting.id, club: b.club, label: b.label } });
   }
   if (after) await after({ sequelize, fittings, scenario });
   return true;

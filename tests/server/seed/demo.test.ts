@@ -1,5 +1,6 @@
 import { QueryTypes } from 'sequelize';
-import { User } from '@/server/models';
+import { Op } from 'sequelize';
+import { Build, User } from '@/server/models';
 import { seedDemo } from '@/server/seed/demo';
 import { createTestDatabase } from '../../support/test-db';
 
@@ -20,6 +21,8 @@ describe('seedDemo', () => {
     // The remote fitting's file has no carry: the ball-flight model filled it, marked as derived.
     const [filled] = await db.sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM shots WHERE club = '4H' AND carry IS NOT NULL AND derived_mask > 0", { type: QueryTypes.SELECT });
     expect(Number(filled.n)).toBe(8);
+    // Demo build specs reach their build records (4 of Nell's builds, 8 of Amos's wedges and irons).
+    expect(await Build.count({ where: { loftDeg: { [Op.ne]: null } } })).toBe(12);
     expect(await seedDemo(db.sequelize, new Date())).toBe(false);
     expect(await User.count()).toBe(4); // owner, two fitters, one player with a sign-in
   });
