@@ -27,13 +27,13 @@ const tsJest = [
 
 const node = {
   testEnvironment: 'node',
-  // Generous for a loaded two-core CI machine: route tests hash passwords and migrate a database.
-  testTimeout: 30_000,
   transform: { '^.+\\.tsx?$': tsJest },
   moduleNameMapper: { ...d3, ...aliases },
 };
 
 module.exports = {
+  // Generous for a loaded two-core CI machine: route tests hash passwords and migrate a database.
+  testTimeout: 30_000,
   projects: [
     {
       ...node,
