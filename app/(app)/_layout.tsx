@@ -3,6 +3,7 @@ import { useSession } from '@/components/session/session-provider';
 import { ErrorState } from '@/components/ui/error-state';
 import { LoadingState } from '@/components/ui/loading-state';
 import { Screen } from '@/components/ui/screen';
+import { HeaderHomeButton } from '@/components/ui/header-home-button';
 import { headerOptions } from '@/components/ui/stack-options';
 
 export { ErrorBoundary } from 'expo-router';
@@ -23,7 +24,14 @@ export default function AppLayout() {
     );
   }
   return (
-    <Stack screenOptions={{ ...headerOptions, headerBackTitle: 'Back' }}>
+    <Stack
+      screenOptions={({ navigation }) => ({
+        ...headerOptions,
+        headerBackTitle: 'Back',
+        // A page opened by its address has no history: offer the way to the start page instead.
+        ...(navigation.canGoBack() ? {} : { headerLeft: () => <HeaderHomeButton /> }),
+      })}
+    >
       <Stack.Screen name="(tabs)" options={{ headerShown: false }} />
     </Stack>
   );
