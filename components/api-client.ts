@@ -52,21 +52,28 @@ export async function apiRequest<T>(method: Method, path: string, options: { bod
   }
   if (res.status === 204) return undefined as T;
   const text = await res.text();
-  let json: unknown = undefined;
+  if (!res.ok) throw apiErrorOf(res.status, text);
+  try {
+    return (text ? JSON.parse(text) : undefined) as T;
+  } catch {
+    throw new ApiError(res.status, 'BAD_ANSWER', 'The server sent an answer Ovalyard cannot read. Try again.');
+  }
+}
+
+/** The ApiError of a non-2xx answer's text: the API's error body, or a general one. */
+export function apiErrorOf(status: number, text: string): ApiError {
+  let json: unknown;
   try {
     json = text ? JSON.parse(text) : undefined;
   } catch {
     json = undefined;
   }
-  if (!res.ok) {
-    const parsed = errorBodySchema.safeParse(json);
-    if (parsed.success) {
-      const { code, message, details } = parsed.data.error;
-      throw new ApiError(res.status, code, message, details);
-    }
-    throw new ApiError(res.status, 'HTTP_' + res.status, `The server answered ${res.status}. Try again in a moment.`);
+  const parsed = errorBodySchema.safeParse(json);
+  if (parsed.success) {
+    const { code, message, details } = parsed.data.error;
+    return new ApiError(status, code, message, details);
   }
-  return json as T;
+  return new ApiError(status, 'HTTP_' + status, `The server answered ${status}. Try again in a moment.`);
 }
 
 export const api = {

@@ -3,7 +3,8 @@
  * JSON client (api-client.ts) parses answers as JSON; the raw file is text/csv.
  */
 import { ApiError } from '../api-client';
-import { apiErrorOf, type UploadFile } from './upload-request';
+import { apiErrorOf } from '../api-client';
+import type { UploadFile } from './upload-request';
 
 /**
  * GETs /api + path as text, with the session cookie.

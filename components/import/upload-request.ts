@@ -3,30 +3,13 @@
  * fetch: fetch reports no upload progress in browsers. Same origin, the session cookie, and the
  * CSRF header the server requires; the browser sets the multipart Content-Type itself.
  */
-import { errorBodySchema } from '@/server/schemas';
-import { ApiError } from '../api-client';
+import { ApiError, apiErrorOf } from '../api-client';
 
 /** A file to upload: the browser's File (what expo-document-picker gives on the web). */
 export type UploadFile = Blob & { name: string };
 
 /** Upload progress: 0..1 of the bytes sent, or null when the browser cannot tell. */
 export type UploadProgress = (fraction: number | null) => void;
-
-/** The ApiError of a non-2xx answer's text (the API's error body, or a general one). */
-export function apiErrorOf(status: number, text: string): ApiError {
-  let json: unknown;
-  try {
-    json = text ? JSON.parse(text) : undefined;
-  } catch {
-    json = undefined;
-  }
-  const parsed = errorBodySchema.safeParse(json);
-  if (parsed.success) {
-    const { code, message, details } = parsed.data.error;
-    return new ApiError(status, code, message, details);
-  }
-  return new ApiError(status, 'HTTP_' + status, `The server answered ${status}. Try again in a moment.`);
-}
 
 /**
  * POSTs `file` (field "file") and `options` (field "options", JSON text) to /api + path.
