@@ -15,7 +15,7 @@ import { recipesRouter } from './routes/recipes';
 import { shotsRouter } from './routes/shots';
 import { teamRouter } from './routes/team';
 import type { CommitHooks } from './services/bay-files';
-import type { Mailer } from './services/mailer';
+import { createMailer, type Mailer } from './services/mailer';
 
 export interface AppDeps {
   sequelize: Sequelize;
@@ -29,7 +29,7 @@ export interface AppDeps {
 }
 
 /** Builds the Express app; listening is the caller's business (server/index.ts, tests). */
-export function createApp({ sequelize, config, serveWeb = false, log, commitHooks }: AppDeps): Express {
+export function createApp({ sequelize, config, mailer, serveWeb = false, log, commitHooks }: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   if (config.trustProxy) app.set('trust proxy', 1);
@@ -42,7 +42,7 @@ export function createApp({ sequelize, config, serveWeb = false, log, commitHook
     next();
   });
   api.use('/health', healthRouter(sequelize));
-  api.use(authRouter(config));
+  api.use(authRouter(config, mailer ?? createMailer(config.mail.smtpUrl, config.mail.from)));
   // Everything below needs a signed-in user; each service checks role and shop again.
   api.use(['/players', '/fittings', '/team', '/recipes', '/bay-files', '/shots', '/builds'], authenticate(config));
   api.use('/players', playersRouter());

@@ -2,12 +2,13 @@ import type { Sequelize } from 'sequelize';
 import { BayFile } from './bay-file';
 import { Build } from './build';
 import { Fitting } from './fitting';
+import { PasswordReset } from './password-reset';
 import { Player } from './player';
 import { Recipe } from './recipe';
 import { Shop } from './shop';
 import { User } from './user';
 
-export { BayFile, Build, Fitting, Player, Recipe, Shop, User };
+export { BayFile, Build, Fitting, PasswordReset, Player, Recipe, Shop, User };
 
 /** Registers every model and association on one Sequelize instance. */
 export function initModels(sequelize: Sequelize): void {
@@ -18,6 +19,7 @@ export function initModels(sequelize: Sequelize): void {
   BayFile.initModel(sequelize);
   Recipe.initModel(sequelize);
   Build.initModel(sequelize);
+  PasswordReset.initModel(sequelize);
 
   Shop.hasMany(User, { foreignKey: 'shopId' });
   User.belongsTo(Shop, { foreignKey: 'shopId', as: 'shop' });
@@ -33,6 +35,8 @@ export function initModels(sequelize: Sequelize): void {
   BayFile.belongsTo(User, { foreignKey: 'uploadedBy', as: 'uploader' });
   Fitting.hasMany(Build, { foreignKey: 'fittingId', as: 'builds' });
   Build.belongsTo(Fitting, { foreignKey: 'fittingId' });
+  User.hasMany(PasswordReset, { foreignKey: 'userId' });
+  PasswordReset.belongsTo(User, { foreignKey: 'userId' });
   Shop.hasMany(Recipe, { foreignKey: 'shopId' });
   Recipe.belongsTo(Shop, { foreignKey: 'shopId' });
   Recipe.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });

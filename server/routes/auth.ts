@@ -2,11 +2,13 @@ import { Router, type CookieOptions } from 'express';
 import type { Config } from '../config';
 import { actorOf, authenticate } from '../middleware/authenticate';
 import { signInLimiter } from '../middleware/rate-limit';
-import { signInBodySchema, updateMeBodySchema } from '../schemas';
+import { forgotBodySchema, resetBodySchema, signInBodySchema, updateMeBodySchema } from '../schemas';
+import type { Mailer } from '../services/mailer';
+import { requestPasswordReset, resetPassword } from '../services/password-resets';
 import { describeMe, loadActor, signIn, signOutEverywhere, updateUnits } from '../services/auth';
 import { SESSION_COOKIE, signSessionToken, ttlMs } from '../services/tokens';
 
-export function authRouter(config: Config): Router {
+export function authRouter(config: Config, mailer: Mailer): Router {
   const router = Router();
   const cookie: CookieOptions = {
     httpOnly: true,
@@ -27,6 +29,21 @@ export function authRouter(config: Config): Router {
   // Signing out clears this browser's cookie; it needs no valid session.
   router.post('/auth/sign-out', (_req, res) => {
     res.clearCookie(SESSION_COOKIE, cookie);
+    res.status(204).end();
+  });
+
+  // The same answer whether or not the account exists; rate-limited like sign-in.
+  router.post('/auth/forgot', signInLimiter(config), async (req, res) => {
+    const { email } = forgotBodySchema.parse(req.body);
+    // The link goes to the configured address; without one, to the address this request came to.
+    const appUrl = config.appUrl ?? `${req.protocol}://${req.get('host')}`;
+    await requestPasswordReset(email, appUrl, mailer);
+    res.status(204).end();
+  });
+
+  router.post('/auth/reset', signInLimiter(config), async (req, res) => {
+    const { token, password } = resetBodySchema.parse(req.body);
+    await resetPassword(token, password);
     res.status(204).end();
   });
 

@@ -25,3 +25,11 @@ export type Me = z.infer<typeof meSchema>;
 export const signInResponseSchema = z.object({ user: meSchema });
 
 export const updateMeBodySchema = z.object({ units: unitsPreferenceSchema });
+
+export const forgotBodySchema = z.object({
+  email: z.string().trim().toLowerCase().pipe(z.email({ message: 'Enter an e-mail address.' })),
+});
+export const resetBodySchema = z.object({
+  token: z.string().min(20, 'This link is incomplete.').max(200),
+  password: z.string().min(10, 'A password needs at least 10 characters.').max(200),
+});

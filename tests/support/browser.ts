@@ -9,6 +9,7 @@ import fs from 'node:fs';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { createApp } from '@/server/app';
 import { loadConfig } from '@/server/config';
+import type { MailMessage } from '@/server/services/mailer';
 import { seedDemo } from '@/server/seed/demo';
 import { createTestDatabase } from './test-db';
 
@@ -29,6 +30,8 @@ export async function launchBrowser(): Promise<Browser> {
 
 export interface ServedApp {
   url: string;
+  /** The e-mails the server sent (a capturing mailer). */
+  mail: MailMessage[];
   close: () => Promise<void>;
 }
 
@@ -45,7 +48,8 @@ export async function serveDemo(now = new Date()): Promise<ServedApp> {
     DB_PASSWORD: db.password,
     WEB_DIST: path.resolve(__dirname, '../../dist'),
   });
-  const app = createApp({ sequelize, config, serveWeb: true, log: () => {} });
+  const mail: MailMessage[] = [];
+  const app = createApp({ sequelize, config, serveWeb: true, log: () => {}, mailer: { send: async (m) => void mail.push(m) } });
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(0, '127.0.0.1', () => resolve(s));
   });
@@ -53,6 +57,7 @@ export async function serveDemo(now = new Date()): Promise<ServedApp> {
   const port = typeof address === 'object' && address ? address.port : 0;
   return {
     url: `http://127.0.0.1:${port}`,
+    mail,
     close: async () => {
       await new Promise((r) => server.close(r));
       await drop();
@@ -64,7 +69,7 @@ export async function serveDemo(now = new Date()): Promise<ServedApp> {
  * The served demo and a browser for one test file: started before its tests, closed after.
  * Read `.url` and `.browser` inside the tests (they are set in beforeAll).
  */
-export function useDemoInBrowser(): { readonly url: string; readonly browser: Browser } {
+export function useDemoInBrowser(): { readonly url: string; readonly browser: Browser; readonly mail: MailMessage[] } {
   let served: ServedApp | undefined;
   let browser: Browser | undefined;
   beforeAll(async () => {
@@ -84,6 +89,9 @@ export function useDemoInBrowser(): { readonly url: string; readonly browser: Br
     },
     get browser() {
       return browser!;
+    },
+    get mail() {
+      return served!.mail;
     },
   };
 }
