@@ -8,6 +8,7 @@ import { Button } from '../ui/button';
 import { Notice } from '../ui/notice';
 import { TextField } from '../ui/text-field';
 import { space } from '../theme';
+import { AuthLink } from './auth-link';
 import { DemoHint } from './demo-hint';
 import { useSignInMutation } from './use-sign-in';
 
@@ -63,6 +64,7 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
         onSubmitEditing={submit}
       />
       <Button title="Sign in" onPress={submit} busy={signIn.isPending} />
+      <AuthLink href="/forgot">Forgot your password?</AuthLink>
       <DemoHint />
     </View>
   );
