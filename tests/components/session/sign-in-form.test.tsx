@@ -73,4 +73,11 @@ describe('SignInForm', () => {
     await waitFor(() => expect(onSignedIn).toHaveBeenCalledTimes(1));
     expect(client.getQueryData(['me'])).toEqual(user);
   });
+
+  it('SignInForm, signed out, links to the forgotten-password screen', () => {
+    renderForm();
+    const json = JSON.stringify(screen.toJSON());
+    expect(json).toContain('"href":"/forgot"');
+    expect(pageText()).toContain('Forgot your password?');
+  });
 });
