@@ -1,8 +1,8 @@
 import { render, screen } from '@testing-library/react-native';
 import { DifferenceBars } from '@/components/charts/difference-bars';
+import { byWebTestId } from '../../support/render-helpers';
 
 /** Host elements with a test id (react-native-svg on the web preset writes testID as data-testid). */
-const byWebTestId = (id: string) => screen.UNSAFE_root.findAll((n) => typeof n.type === 'string' && n.props['data-testid'] === id);
 
 // The first interval is the NAG Library g07ca example's Welch interval (difference 4.0,
 // 95% CI [0.4410, 7.5590], published); the second is invented and spans zero.

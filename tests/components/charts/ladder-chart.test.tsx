@@ -1,9 +1,9 @@
 import { render, screen } from '@testing-library/react-native';
 import { buildLadder } from '@/analysis/ladder';
 import { LadderChart } from '@/components/charts/ladder-chart';
+import { byWebTestId } from '../../support/render-helpers';
 
 /** Host elements with a test id (react-native-svg on the web preset writes testID as data-testid). */
-const byWebTestId = (id: string) => screen.UNSAFE_root.findAll((n) => typeof n.type === 'string' && n.props['data-testid'] === id);
 
 // Invented carries, metres: 8I → 9I is 4 m (tight under 7 yd, analysis/ladder GAP_RULES, common practice, no source).
 const RUNGS = buildLadder([

@@ -1,9 +1,9 @@
 import { render, screen } from '@testing-library/react-native';
 import { optimiseLaunch } from '@/analysis/flight';
 import { LaunchWindowPlot } from '@/components/charts/launch-window-plot';
+import { byWebTestId } from '../../support/render-helpers';
 
 /** Host elements with a test id (react-native-svg on the web preset writes testID as data-testid). */
-const byWebTestId = (id: string) => screen.UNSAFE_root.findAll((n) => typeof n.type === 'string' && n.props['data-testid'] === id);
 
 // A coarse optimiser run (analysis/flight) and invented shots of one club.
 const OPTIMUM = optimiseLaunch(52, {}, { launchRangeDeg: [6, 30], launchStepDeg: 2, spinRangeRpm: [1000, 9000], spinStepRpm: 500 });

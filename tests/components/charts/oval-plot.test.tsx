@@ -2,6 +2,7 @@ import { fireEvent, render, screen } from '@testing-library/react-native';
 import { groundOval } from '@/analysis/ovals';
 import type { PlotShot } from '@/components/charts/chart-types';
 import { OvalPlot } from '@/components/charts/oval-plot';
+import { byWebTestId, pageText } from '../../support/render-helpers';
 
 // Invented shots of one 7 iron session: two builds of ten shots each.
 const OFF = [-6, 2, 9, -1, 4, -8, 3, 0, 5, -3];
@@ -28,19 +29,7 @@ const GROUPS = ['Steel 105', 'Graphite 80'].map((build, b) => {
  * Host elements with a test id. On the web preset react-native-svg writes testID as the DOM
  * attribute data-testid and onPress as onClick, which the testID queries do not see.
  */
-const byWebTestId = (id: string) => screen.UNSAFE_root.findAll((n) => typeof n.type === 'string' && n.props['data-testid'] === id);
 
-/** All text of the rendered tree (DOM text on the web preset is not seen by the Text queries). */
-function pageText(): string {
-  const walk = (node: unknown): string => {
-    if (node === null || node === undefined) return '';
-    if (typeof node === 'string') return node;
-    if (Array.isArray(node)) return node.map(walk).join(' ');
-    const children = (node as { children?: unknown }).children;
-    return children ? walk(children) : '';
-  };
-  return walk(screen.toJSON());
-}
 
 describe('OvalPlot', () => {
   it('OvalPlot of 20 shots in two builds says so and draws 20 dots', () => {

@@ -2,6 +2,7 @@ import { QueryClientProvider } from '@tanstack/react-query';
 import { fireEvent, render, screen, waitFor } from '@testing-library/react-native';
 import { createQueryClient } from '@/components/queries/query-client';
 import { ForgotForm } from '@/components/session/forgot-form';
+import { apiAnswer, pageText } from '../../support/render-helpers';
 
 // The answers mocked here follow the API contract of POST /api/auth/forgot (always 204; 429
 // TOO_MANY_ATTEMPTS; 400 VALIDATION_FAILED); product rules, no outside source.
@@ -13,21 +14,7 @@ function renderForm() {
   );
 }
 
-/** All text of the rendered tree (react-native-web renders DOM host elements; see sign-in-form.test). */
-function pageText(): string {
-  const walk = (node: unknown): string => {
-    if (node === null || node === undefined) return '';
-    if (typeof node === 'string') return node;
-    if (Array.isArray(node)) return node.map(walk).join(' ');
-    const children = (node as { children?: unknown }).children;
-    return children ? walk(children) : '';
-  };
-  return walk(screen.toJSON());
-}
 
-function answer(status: number, body?: unknown): Response {
-  return { ok: status >= 200 && status < 300, status, text: async () => (body === undefined ? '' : JSON.stringify(body)) } as Response;
-}
 
 const fetchMock = jest.fn();
 beforeEach(() => {
@@ -45,7 +32,7 @@ describe('ForgotForm', () => {
   });
 
   it('ForgotForm, a 204, confirms with the trimmed lower-case address', async () => {
-    fetchMock.mockResolvedValue(answer(204));
+    fetchMock.mockResolvedValue(apiAnswer(204));
     renderForm();
     fireEvent.changeText(screen.getByLabelText('E-mail'), '  Nell.Tarrant@Example.NET ');
     fireEvent.press(screen.getByLabelText('Send the link'));
@@ -61,7 +48,7 @@ describe('ForgotForm', () => {
 
   it('ForgotForm, rate-limited, shows the answer in the page and keeps the form', async () => {
     const message = 'Too many attempts. Wait a few minutes and try again.';
-    fetchMock.mockResolvedValue(answer(429, { error: { code: 'TOO_MANY_ATTEMPTS', message } }));
+    fetchMock.mockResolvedValue(apiAnswer(429, { error: { code: 'TOO_MANY_ATTEMPTS', message } }));
     renderForm();
     fireEvent.changeText(screen.getByLabelText('E-mail'), 'a@example.test');
     fireEvent.press(screen.getByLabelText('Send the link'));

@@ -3,6 +3,7 @@ import { fireEvent, render, screen, waitFor } from '@testing-library/react-nativ
 import fc from 'fast-check';
 import { createQueryClient } from '@/components/queries/query-client';
 import { PASSWORD_MISMATCH, parseResetText, ResetForm } from '@/components/session/reset-form';
+import { apiAnswer, pageText } from '../../support/render-helpers';
 
 // The rules checked here are the API contract's (server/schemas/auth.ts, resetBodySchema): a
 // password of at least 10 characters, a token of at least 20. Product rules, no outside source.
@@ -18,17 +19,6 @@ function renderForm(onSignIn = jest.fn()) {
   return { onSignIn, client };
 }
 
-/** All text of the rendered tree (react-native-web renders DOM host elements; see sign-in-form.test). */
-function pageText(): string {
-  const walk = (node: unknown): string => {
-    if (node === null || node === undefined) return '';
-    if (typeof node === 'string') return node;
-    if (Array.isArray(node)) return node.map(walk).join(' ');
-    const children = (node as { children?: unknown }).children;
-    return children ? walk(children) : '';
-  };
-  return walk(screen.toJSON());
-}
 
 /** The hrefs of the rendered links. */
 function linkHrefs(): string[] {
@@ -44,9 +34,6 @@ function linkHrefs(): string[] {
   return out;
 }
 
-function answer(status: number, body?: unknown): Response {
-  return { ok: status >= 200 && status < 300, status, text: async () => (body === undefined ? '' : JSON.stringify(body)) } as Response;
-}
 
 function fill(password: string, confirm: string) {
   fireEvent.changeText(screen.getByLabelText('New password'), password);
@@ -113,7 +100,7 @@ describe('ResetForm', () => {
   });
 
   it('ResetForm, 10 characters twice and a 204, posts them and offers sign-in', async () => {
-    fetchMock.mockResolvedValue(answer(204));
+    fetchMock.mockResolvedValue(apiAnswer(204));
     const { onSignIn } = renderForm();
     fill('1234567890', '1234567890');
     await waitFor(() => expect(pageText()).toContain('Your password is set. Sign in with it.'));
@@ -127,7 +114,7 @@ describe('ResetForm', () => {
 
   it('ResetForm, a used or expired link, shows the answer and a way to a new link', async () => {
     const message = 'This link has expired or was already used. Ask for a new one.';
-    fetchMock.mockResolvedValue(answer(400, { error: { code: 'RESET_LINK_INVALID', message } }));
+    fetchMock.mockResolvedValue(apiAnswer(400, { error: { code: 'RESET_LINK_INVALID', message } }));
     renderForm();
     fill('a new long password', 'a new long password');
     await waitFor(() => expect(pageText()).toContain(message));
@@ -137,7 +124,7 @@ describe('ResetForm', () => {
 
   it('ResetForm, the server refuses the password, shows its message under the field', async () => {
     const details = [{ path: ['password'], message: 'A password needs at least 10 characters.' }];
-    fetchMock.mockResolvedValue(answer(400, { error: { code: 'VALIDATION_FAILED', message: 'Check the fields.', details } }));
+    fetchMock.mockResolvedValue(apiAnswer(400, { error: { code: 'VALIDATION_FAILED', message: 'Check the fields.', details } }));
     renderForm();
     fill('a new long password', 'a new long password');
     await waitFor(() => expect(pageText()).toContain('A password needs at least 10 characters.'));

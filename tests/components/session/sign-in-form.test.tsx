@@ -2,6 +2,7 @@ import { QueryClientProvider } from '@tanstack/react-query';
 import { fireEvent, render, screen, waitFor } from '@testing-library/react-native';
 import { SignInForm } from '@/components/session/sign-in-form';
 import { createQueryClient } from '@/components/queries/query-client';
+import { apiAnswer, pageText } from '../../support/render-helpers';
 
 function renderForm(onSignedIn = jest.fn()) {
   const client = createQueryClient();
@@ -17,20 +18,7 @@ function renderForm(onSignedIn = jest.fn()) {
  * All text of the rendered tree. With react-native-web (the web preset) text renders as DOM
  * host elements, which the Text-based queries of @testing-library/react-native do not see.
  */
-function pageText(): string {
-  const walk = (node: unknown): string => {
-    if (node === null || node === undefined) return '';
-    if (typeof node === 'string') return node;
-    if (Array.isArray(node)) return node.map(walk).join(' ');
-    const children = (node as { children?: unknown }).children;
-    return children ? walk(children) : '';
-  };
-  return walk(screen.toJSON());
-}
 
-function answer(status: number, body: unknown): Response {
-  return { ok: status >= 200 && status < 300, status, text: async () => JSON.stringify(body) } as Response;
-}
 
 const fetchMock = jest.fn();
 beforeEach(() => {
@@ -40,7 +28,7 @@ beforeEach(() => {
 
 describe('SignInForm', () => {
   it('SignInForm, wrong password, shows the refusal in the page', async () => {
-    fetchMock.mockResolvedValue(answer(401, { error: { code: 'BAD_CREDENTIALS', message: 'E-mail or password is wrong.' } }));
+    fetchMock.mockResolvedValue(apiAnswer(401, { error: { code: 'BAD_CREDENTIALS', message: 'E-mail or password is wrong.' } }));
     const { onSignedIn } = renderForm();
     fireEvent.changeText(screen.getByLabelText('E-mail'), 'Someone@Example.test');
     fireEvent.changeText(screen.getByLabelText('Password'), 'not-it');
@@ -65,7 +53,7 @@ describe('SignInForm', () => {
 
   it('SignInForm, right password, records the user and calls onSignedIn', async () => {
     const user = { id: 'u1', email: 'a@example.test', name: 'A', role: 'fitter', shop: { id: 's', name: 'S' }, playerId: null, units: 'metric' };
-    fetchMock.mockResolvedValue(answer(200, { user }));
+    fetchMock.mockResolvedValue(apiAnswer(200, { user }));
     const { onSignedIn, client } = renderForm();
     fireEvent.changeText(screen.getByLabelText('E-mail'), 'a@example.test');
     fireEvent.changeText(screen.getByLabelText('Password'), 'secret');
