@@ -17,7 +17,7 @@ import { Section } from '../ui/section';
 import { SwitchField } from '../ui/switch-field';
 import { ChipRow } from './chip-row';
 import { CourseConditions } from './course-conditions';
-import { formatField } from './format-field';
+import { formatField } from '../format-field';
 import { GroupTable } from './group-table';
 import { HeadToHeadSection } from './head-to-head-section';
 import { LaunchWindowSection } from './launch-window-section';

@@ -5,7 +5,7 @@ import type { GroupAnalysis } from '@/analysis/session';
 import type { UnitSystem } from '@/analysis/units';
 import { colors, space } from '../theme';
 import { AppText } from '../ui/app-text';
-import { fieldNumber, unitText } from './format-field';
+import { fieldNumber, MISSING, unitText } from '../format-field';
 
 type GroupTableProps = { groups: readonly GroupAnalysis[]; units: UnitSystem; selectedClub?: string | null };
 
@@ -23,7 +23,7 @@ const COLUMNS: { field: ShotField | 'smash'; title: string }[] = [
 function cell(g: GroupAnalysis, field: ShotField | 'smash', units: UnitSystem): { mean: string; sd: string } {
   const s = field === 'smash' ? g.smashFactor : g.fields[field];
   const f: ShotField = field === 'smash' ? 'smashFactor' : field;
-  if (!s) return { mean: '—', sd: '' };
+  if (!s) return { mean: MISSING, sd: '' };
   return { mean: fieldNumber(s.mean, f, units), sd: s.sd == null ? '' : `±${fieldNumber(s.sd, f, units)}` };
 }
 

@@ -7,7 +7,7 @@ import { colors, space } from '../theme';
 import { AppText } from '../ui/app-text';
 import { Card } from '../ui/card';
 import { ChipRow } from './chip-row';
-import { fieldNumber, unitText } from './format-field';
+import { fieldNumber, unitText } from '../format-field';
 import { useWidth } from './use-width';
 
 const FIELDS: ShotField[] = ['carry', 'offline', 'ballSpeed', 'smashFactor', 'launchAngle', 'spinRate', 'spinAxis'];

@@ -6,7 +6,7 @@ import type { PlotShot } from '@/server/schemas';
 import { LaunchWindowPlot } from '../charts';
 import { AppText } from '../ui/app-text';
 import { Card } from '../ui/card';
-import { formatField } from './format-field';
+import { formatField } from '../format-field';
 import { useWidth } from './use-width';
 
 type LaunchWindowSectionProps = { shots: readonly PlotShot[]; ballSpeedMps: number | null; air: AirConditions; units: UnitSystem };

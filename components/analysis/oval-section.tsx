@@ -11,7 +11,7 @@ import { space } from '../theme';
 import { AppText } from '../ui/app-text';
 import { Card } from '../ui/card';
 import { SwitchField } from '../ui/switch-field';
-import { formatField, formatSide } from './format-field';
+import { formatField, formatSide } from '../format-field';
 import { StrayList } from './stray-list';
 import { useWidth } from './use-width';
 

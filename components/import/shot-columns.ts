@@ -3,14 +3,13 @@
  * in the user's units.
  */
 import type { Shot, ShotField } from '@/analysis/fields';
-import { displayUnits, findUnit, fromCanonical, type UnitSystem } from '@/analysis/units';
+import { displayUnits, findUnit, type UnitSystem } from '@/analysis/units';
+import { fieldNumber, formatLettered } from '../format-field';
 import { TARGET_LABELS } from './recipe-edit';
 
 /** Fields the preview shows when the shots have them, in this order. */
 export const PREVIEW_FIELDS: readonly ShotField[] = ['ballSpeed', 'clubSpeed', 'launchAngle', 'spinRate', 'carry', 'offline', 'total'];
 
-/** Decimals shown per field (spin in whole rpm; speeds, distances and angles to 0.1). */
-const DECIMALS: Partial<Record<ShotField, number>> = { spinRate: 0, backSpin: 0, sideSpin: 0, smashFactor: 2 };
 
 export type PreviewColumn = { field: ShotField; title: string; unit: string };
 
@@ -29,13 +28,5 @@ export function previewColumns(shots: readonly Shot[], system: UnitSystem, max =
  */
 export function formatShotValue(shot: Shot, field: ShotField, system: UnitSystem): string {
   const v = shot.values[field];
-  if (v === undefined) return '–';
-  const shown = fromCanonical(v, displayUnits(system)[field], field);
-  const digits = DECIMALS[field] ?? 1;
-  if (field === 'offline' || field === 'launchDirection') {
-    const text = Math.abs(shown).toFixed(digits);
-    if (Number(text) === 0) return text;
-    return `${text} ${shown < 0 ? 'L' : 'R'}`;
-  }
-  return shown.toFixed(digits);
+  return field === 'offline' || field === 'launchDirection' ? formatLettered(v, field, system) : fieldNumber(v, field, system);
 }
