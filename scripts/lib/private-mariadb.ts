@@ -202,12 +202,7 @@ export async function startPrivateMariadb(opts: PrivateMariadbOptions): Promise<
   if (!setup.ok) throw new Error(`creating the database and user failed: ${setup.out}`);
   if (started) log(`Private MariaDB started on 127.0.0.1:${opts.port} (data in ${dataDir}).`);
 
-  const stop = async () => {
-    spawnSync(adminBinary(), ['--no-defaults', `--socket=${socket}`, '-uroot', 'shutdown'], { stdio: 'ignore' });
-    const until = Date.now() + 20_000;
-    while (alive(pid) && Date.now() < until) await sleep(100);
-    if (alive(pid)) process.kill(pid, 'SIGKILL');
-  };
+  const stop = () => shutdown(socket, pid);
   return { host: '127.0.0.1', port: opts.port, socket, database: db, user, password: opts.password, pid, startedHere: started, stop };
 }
 
@@ -218,9 +213,14 @@ export async function stopPrivateMariadb(dataDir: string): Promise<boolean> {
   if (!fs.existsSync(pidFile)) return false;
   const pid = Number(fs.readFileSync(pidFile, 'utf8').trim());
   if (!alive(pid)) return false;
+  await shutdown(socket, pid);
+  return true;
+}
+
+/** Asks the server to shut down, waits up to 20 s, then kills it. */
+async function shutdown(socket: string, pid: number): Promise<void> {
   spawnSync(adminBinary(), ['--no-defaults', `--socket=${socket}`, '-uroot', 'shutdown'], { stdio: 'ignore' });
   const until = Date.now() + 20_000;
   while (alive(pid) && Date.now() < until) await sleep(100);
   if (alive(pid)) process.kill(pid, 'SIGKILL');
-  return true;
 }
