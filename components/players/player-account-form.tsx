@@ -5,7 +5,7 @@ import { useGivePlayerAccountMutation } from '../queries/players';
 import { AppText } from '../ui/app-text';
 import { Button } from '../ui/button';
 import { Notice } from '../ui/notice';
-import { TextField } from '../ui/text-field';
+import { FirstSignInFields } from '../ui/first-sign-in-fields';
 import { space } from '../theme';
 import { parseWith, useTextForm } from '../use-text-form';
 
@@ -36,24 +36,7 @@ export function PlayerAccountForm({ player, onDone, onCancel }: PlayerAccountFor
         password over in person; they can keep using it.
       </AppText>
       {give.error ? <Notice tone="danger">{bannerFor(give.error)}</Notice> : null}
-      <TextField
-        label="E-mail"
-        value={text.email}
-        onChangeText={set('email')}
-        error={shown.email}
-        autoCapitalize="none"
-        inputMode="email"
-        keyboardType="email-address"
-      />
-      <TextField
-        label="First password"
-        value={text.password}
-        onChangeText={set('password')}
-        error={shown.password}
-        hint="At least 10 characters."
-        secureTextEntry
-        autoComplete="new-password"
-      />
+      <FirstSignInFields email={text.email} password={text.password} onChange={set} errors={shown} />
       <View style={styles.actions}>
         <Button title="Give sign-in" onPress={submit} busy={give.isPending} />
         <Button title="Cancel" variant="quiet" onPress={onCancel} disabled={give.isPending} />

@@ -5,6 +5,7 @@ import { useAddFitterMutation } from '../queries/team';
 import { AppText } from '../ui/app-text';
 import { Button } from '../ui/button';
 import { Notice } from '../ui/notice';
+import { FirstSignInFields } from '../ui/first-sign-in-fields';
 import { TextField } from '../ui/text-field';
 import { space } from '../theme';
 import { parseWith, useTextForm } from '../use-text-form';
@@ -33,24 +34,7 @@ export function TeamMemberForm({ onDone, onCancel }: TeamMemberFormProps) {
       <AppText tone="muted">The new fitter signs in with this e-mail and first password.</AppText>
       {banner ? <Notice tone="danger">{banner}</Notice> : null}
       <TextField label="Name" value={text.name} onChangeText={set('name')} error={shown.name} />
-      <TextField
-        label="E-mail"
-        value={text.email}
-        onChangeText={set('email')}
-        error={shown.email}
-        autoCapitalize="none"
-        inputMode="email"
-        keyboardType="email-address"
-      />
-      <TextField
-        label="First password"
-        value={text.password}
-        onChangeText={set('password')}
-        error={shown.password}
-        hint="At least 10 characters."
-        secureTextEntry
-        autoComplete="new-password"
-      />
+      <FirstSignInFields email={text.email} password={text.password} onChange={set} errors={shown} />
       <View style={styles.actions}>
         <Button title="Add fitter" onPress={submit} busy={add.isPending} />
         <Button title="Cancel" variant="quiet" onPress={onCancel} disabled={add.isPending} />
