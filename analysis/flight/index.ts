@@ -11,7 +11,12 @@ export {
   RAD_PER_S_PER_RPM,
   STANDARD_GRAVITY_MPS2,
 } from './constants';
-export { defaultCoefficients } from './default-coefficients';
+export {
+  COEFFICIENT_MODELS,
+  coefficientModel,
+  defaultCoefficients,
+  smitsSmithDragLyuLiftCoefficients,
+} from './default-coefficients';
 export { FLIGHT_FIELDS, fillFlightFields, flightFieldValue, type FlightField } from './fill-flight-fields';
 export type { ForceModel } from './force-model';
 export {
@@ -24,6 +29,7 @@ export {
 export { launchFromShot, type ShotLaunch } from './launch-from-shot';
 export { launchVectors, type Launch, type LaunchVectors } from './launch-vectors';
 export { LYU_DRAG_BRANCH_SWITCH_RE, lyuCoefficients, lyuDragCoefficient, lyuLiftCoefficient } from './lyu-coefficients';
+export { DRAG_CRISIS_RE, modernBallCoefficients, modernBallDragCoefficient, modernBallLiftCoefficient } from './modern-ball-coefficients';
 export { DEFAULT_CO2_MOLE_FRACTION, moistAirDensityKgM3, saturationVapourPressurePa } from './moist-air-density';
 export { normaliseShot, type NormalisedShot } from './normalise-shot';
 export {
@@ -33,7 +39,7 @@ export {
   type OptimiseOptions,
   type WindowRow,
 } from './optimise-launch';
-export { reynoldsNumber } from './reynolds-number';
+export { reynoldsNumber, reynoldsPerSpeed } from './reynolds-number';
 export { simulateFlight, type FlightOptions, type FlightResult } from './simulate-flight';
 export { smitsSmithCoefficients, smitsSmithDragCoefficient, smitsSmithLiftCoefficient } from './smits-smith-coefficients';
 export { SPIN_DECAY_COEFFICIENT, spinDecayTimeConstantS } from './spin-decay';
@@ -46,3 +52,4 @@ export {
   isaPressurePa,
   isaTemperatureK,
 } from './standard-atmosphere';
+export { GRASS_ROUGHNESS_M, WIND_REFERENCE_HEIGHT_M, windProfileFactor } from './wind-profile';

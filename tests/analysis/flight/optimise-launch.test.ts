@@ -31,7 +31,8 @@ describe('optimiseLaunch', () => {
     expect(polygon[0]).toEqual({ launchAngleDeg: rows[0].launchAngleDeg, spinRateRpm: rows[0].spinMinRpm });
     expect(polygon[polygon.length - 1]).toEqual({ launchAngleDeg: rows[0].launchAngleDeg, spinRateRpm: rows[0].spinMaxRpm });
   });
-  // Property from CHECKS.md / the issue: the carry-best launch angle falls as spin rises.
+  // Property of any lifting ball (e.g. Penner, "The physics of golf: the optimum loft of a driver",
+  // Am. J. Phys. 69:563, 2001): the carry-best launch angle falls as spin rises.
   it('optimiseLaunch with a fixed spin gives a best launch angle that falls as spin rises', () => {
     const angles = [2000, 3000, 4500, 6000, 8000].map(
       (spin) => optimiseLaunch(70, {}, { spinRangeRpm: [spin, spin], launchRangeDeg: [2, 40] }).best.launchAngleDeg,
