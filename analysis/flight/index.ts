@@ -2,6 +2,7 @@ export { resolveAir, type AirConditions, type ResolvedAir, type Wind } from './a
 export { sutherlandViscosityPaS } from './air-viscosity';
 export { ballForces, type UnitVector } from './ball-forces';
 export type { CoefficientModel } from './coefficient-model';
+export type { Conditions } from './conditions';
 export {
   BALL_AREA_M2,
   BALL_DIAMETER_M,
@@ -19,6 +20,20 @@ export {
 } from './default-coefficients';
 export { FLIGHT_FIELDS, fillFlightFields, flightFieldValue, type FlightField } from './fill-flight-fields';
 export type { ForceModel } from './force-model';
+export {
+  craterAngleDeg,
+  GROUND_FIRMNESS_PARAMETERS,
+  GROUND_FIRMNESSES,
+  groundRun,
+  TURF_FRICTION,
+  turfBounce,
+  turfRestitution,
+  ROLL_START_MPS,
+  type GroundFirmness,
+  type GroundLanding,
+  type GroundParameters,
+  type GroundRun,
+} from './ground-run';
 export {
   integrateTrajectory,
   type IntegrationOptions,
