@@ -13,7 +13,8 @@ import { BALL_RADIUS_M, RAD_PER_DEG, STANDARD_GRAVITY_MPS2 } from './constants';
  *   vn ≤ 20 m/s and 0.120 above; friction coefficient μ = 0.43. These were fitted on greens.
  * - Assumed (no source; chosen so a tour-average drive runs about 10 % of its carry on normal
  *   ground, common practice, no source): the firmness scales θc and e, and sets the rolling
- *   deceleration of the final roll (GROUND_FIRMNESS_PARAMETERS); hops between bounces fly
+ *   deceleration of the final roll (GROUND_FIRMNESS_PARAMETERS), which grows with speed
+ *   (rollDistanceM); hops between bounces fly
  *   without air (speeds of a few m/s); the ball is a uniform sphere (I = 2/5·m·r²); the roll
  *   starts once a bounce leaves the ground slower than 0.5 m/s upward, with the rolling speed
  *   from the angular momentum about the contact point; one ground for every club (a fairway:
@@ -30,15 +31,15 @@ export interface GroundParameters {
   craterScale: number;
   /** Multiplies Penner's coefficient of restitution. Assumed. */
   restitutionScale: number;
-  /** Deceleration of the rolling ball (m/s²). Assumed. */
+  /** Deceleration of a slowly rolling ball (m/s²), growing with speed (rollDistanceM). Assumed. */
   rollingDecelerationMps2: number;
 }
 
 /** The assumed parameters per firmness (no source: see the note at the top of this file). */
 export const GROUND_FIRMNESS_PARAMETERS: Readonly<Record<GroundFirmness, GroundParameters>> = {
-  soft: { craterScale: 1.3, restitutionScale: 0.85, rollingDecelerationMps2: 2.0 },
-  normal: { craterScale: 1.0, restitutionScale: 1.0, rollingDecelerationMps2: 1.3 },
-  firm: { craterScale: 0.8, restitutionScale: 1.1, rollingDecelerationMps2: 0.9 },
+  soft: { craterScale: 1.3, restitutionScale: 0.85, rollingDecelerationMps2: 1.2 },
+  normal: { craterScale: 1.0, restitutionScale: 1.0, rollingDecelerationMps2: 0.75 },
+  firm: { craterScale: 0.8, restitutionScale: 1.1, rollingDecelerationMps2: 0.45 },
 };
 
 /** Penner (2002), from memory: the friction coefficient of ball on turf. */
@@ -99,6 +100,20 @@ export function turfBounce(landing: GroundLanding, ground: GroundParameters): Gr
   };
 }
 
+/** Speed (m/s) at which the assumed grass resistance doubles the rolling deceleration. Assumed. */
+export const ROLL_RESISTANCE_SPEED_MPS = 5;
+
+/**
+ * Distance (m) a ball rolling at `speedMps` covers to rest under a deceleration that grows with
+ * speed, a(v) = a0·(1 + v/vr) (a0 the slow-roll deceleration, vr = 5 m/s; assumed: grass holds a
+ * fast ball back more than a slow one): d = (vr/a0)·(v − vr·ln(1 + v/vr)). O(1).
+ * @example rollDistanceM(5, 1) // => 5·(5 − 5·ln 2) = 7.67
+ */
+export function rollDistanceM(speedMps: number, slowDecelerationMps2: number): number {
+  const vr = ROLL_RESISTANCE_SPEED_MPS;
+  return (vr / slowDecelerationMps2) * (speedMps - vr * Math.log1p(speedMps / vr));
+}
+
 /** A landing: ground speed along the landing heading, downward speed, back spin. */
 export interface GroundLanding {
   /** Horizontal speed (m/s), ≥ 0. */
@@ -145,6 +160,6 @@ export function groundRun(landing: GroundLanding, firmness: GroundFirmness = 'no
   }
   const r = BALL_RADIUS_M;
   const rollMps = (5 * vh - 2 * r * spin) / 7;
-  const rollM = (Math.sign(rollMps) * rollMps * rollMps) / (2 * ground.rollingDecelerationMps2);
+  const rollM = Math.sign(rollMps) * rollDistanceM(Math.abs(rollMps), ground.rollingDecelerationMps2);
   return { runM: bounceM + rollM, bounceM, bounces };
 }

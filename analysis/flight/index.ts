@@ -28,7 +28,9 @@ export {
   TURF_FRICTION,
   turfBounce,
   turfRestitution,
+  ROLL_RESISTANCE_SPEED_MPS,
   ROLL_START_MPS,
+  rollDistanceM,
   type GroundFirmness,
   type GroundLanding,
   type GroundParameters,
@@ -50,10 +52,19 @@ export { normaliseShot, type NormalisedShot } from './normalise-shot';
 export {
   optimiseLaunch,
   type LaunchOptimum,
+  type LaunchPick,
   type LaunchWindow,
   type OptimiseOptions,
+  type WindowObjective,
   type WindowRow,
 } from './optimise-launch';
+export {
+  clubWindowAim,
+  DEFAULT_DESCENT_FLOOR_DEG,
+  launchWindowForClub,
+  RUN_MODEL_MIN_DESCENT_DEG,
+  type ClubWindowAim,
+} from './club-launch-window';
 export { reynoldsNumber, reynoldsPerSpeed } from './reynolds-number';
 export { simulateFlight, type FlightOptions, type FlightResult } from './simulate-flight';
 export { smitsSmithCoefficients, smitsSmithDragCoefficient, smitsSmithLiftCoefficient } from './smits-smith-coefficients';

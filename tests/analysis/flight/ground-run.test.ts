@@ -3,6 +3,7 @@ import {
   craterAngleDeg,
   GROUND_FIRMNESS_PARAMETERS,
   groundRun,
+  rollDistanceM,
   simulateFlight,
   turfBounce,
   turfRestitution,
@@ -62,7 +63,20 @@ describe('turfBounce on flat ground', () => {
 });
 
 describe('groundRun', () => {
-  it('groundRun of a ball already rolling on flat ground rolls v²/(2a)', () => {
+  it('rollDistanceM matches a fine numerical integration of dv/dt = −a0·(1 + v/vr)', () => {
+    for (const [v0, a0] of [[2, 0.75], [8, 1.2], [20, 0.45]]) {
+      let v = v0;
+      let x = 0;
+      const h = 1e-4;
+      while (v > 0) {
+        const a = a0 * (1 + v / 5);
+        x += h * (v - (h / 2) * a); // exact for the step at constant a
+        v -= h * a;
+      }
+      expect(rollDistanceM(v0, a0)).toBeCloseTo(x, 2);
+    }
+  });
+  it('groundRun of a ball already rolling runs no farther than a constant slow-roll deceleration allows', () => {
     // Lands rolling with a small downward speed: the bounce grips, e·vy stays under 0.5 m/s.
     const run = groundRun({ horizontalMps: 4, verticalMps: -0.5, backSpinRadS: -4 / BALL_RADIUS_M }, 'normal');
     const v = 4; // already rolling: the bounce changes neither speed nor spin along the surface
