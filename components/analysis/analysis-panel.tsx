@@ -93,7 +93,7 @@ export function AnalysisPanel({ fitting }: AnalysisPanelProps) {
       ) : null}
       {chosen ? (
         <Section title="Launch window">
-          <LaunchWindowSection shots={shots.filter((s) => s.club === chosen)} ballSpeedMps={ballSpeed} air={air.measured} units={units} />
+          <LaunchWindowSection shots={shots.filter((s) => s.club === chosen)} ballSpeedMps={ballSpeed} air={air.normalisedTo ?? air.measured} units={units} club={chosen} />
         </Section>
       ) : null}
       <Section title="Ladder">
