@@ -70,8 +70,8 @@ export interface LaunchOptimum {
   airDensityKgM3: number;
 }
 
-const COARSE_LAUNCH_STEP_DEG = 1;
-const COARSE_SPIN_STEP_RPM = 250;
+const COARSE_LAUNCH_STEP_DEG = 2;
+const COARSE_SPIN_STEP_RPM = 500;
 
 function axis(lo: number, hi: number, step: number, name: string): number[] {
   if (!Number.isFinite(lo) || !Number.isFinite(hi) || lo > hi) throw new RangeError(`${name} range [${lo}, ${hi}] is not valid`);
@@ -91,12 +91,12 @@ function crossing(a: number, fa: number, b: number, fb: number): number {
  * The launch angle and spin rate that maximise carry (or total, on the conditions' ground) at
  * this ball speed, optionally among launches landing at least `minDescentDeg` steep, and the
  * window of launches within `withinPct` % of that best, as rows and an outline for a
- * launch-vs-spin plot. Method: a coarse grid (1° × 250 rpm over 2–44° × 0–12 000 rpm, 2 107
+ * launch-vs-spin plot. Method: a coarse grid (2° × 500 rpm over 2–44° × 0–12 000 rpm, 550
  * flights), a fine grid (default 0.5° × 100 rpm) over the window found there and one coarse step
  * around it, then two rounds of a 5 × 5 grid at a quarter of the fine step around the best.
  * The window's edges are interpolated where the objective or the descent crosses its limit, and
  * its tips between the last launch row inside and the first outside, so it is never cut flat by
- * the grid. O(grid size) trajectories, about 3 000–4 000; `npm run bench` measures the time.
+ * the grid. O(grid size) trajectories, about 1 000–2 000; `npm run bench` measures the time.
  * @throws RangeError when the ball speed is not positive or a range, step or limit is not valid
  * @example optimiseLaunch(53.6, {}, { minDescentDeg: 45 }).best // => { launchAngleDeg: ≈ 19, spinRateRpm: ≈ 5400, … }
  */
