@@ -34,8 +34,9 @@ async function main() {
   }
   if (only.has('flight')) {
     const r = benchFlight();
-    out.flight = { perSecond: r.perSecond, maxCarryErrorPct: r.maxCarryErrorPct };
+    out.flight = { perSecond: r.perSecond, maxCarryErrorPct: r.maxCarryErrorPct, ...Object.fromEntries(Object.entries(r.windowMs).map(([k, ms]) => [`${k}WindowMs`, ms])) };
     log(`flight   ${Math.round(r.perSecond).toLocaleString('en')} trajectories/s on one core (target ≥ 50,000); max carry error vs fine step ${r.maxCarryErrorPct.toExponential(2)} % (target ≤ 0.5)`);
+    log(`window   ${Object.entries(r.windowMs).map(([k, ms]) => `${k} ${ms.toFixed(0)} ms`).join(', ')} for one ball speed (target < 100 ms)`);
   }
   out.process = { rssMb: rssMb() };
   log(`process  resident memory ${rssMb().toFixed(0)} MB`);

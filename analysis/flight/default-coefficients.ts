@@ -1,28 +1,49 @@
 import type { CoefficientModel } from './coefficient-model';
-import { lyuLiftCoefficient } from './lyu-coefficients';
-import { smitsSmithDragCoefficient } from './smits-smith-coefficients';
+import { lyuCoefficients, lyuLiftCoefficient } from './lyu-coefficients';
+import { modernBallCoefficients } from './modern-ball-coefficients';
+import { smitsSmithCoefficients, smitsSmithDragCoefficient } from './smits-smith-coefficients';
 
 /*
- * The default ball: drag from Smits & Smith (1994), CD = 0.24 + 0.18·S, and lift from Lyu,
- * Kensrud, Smith & Tosaya (2018), CL = 1.99·S − 3.25·S² (held at its peak above S ≈ 0.306).
- * Why this pair:
- * - drag must rise with spin ratio; Lyu et al.'s drag fit is in Reynolds number alone (a ball
- *   with little spin) and carries a tour-speed driver about 30 yd past the commonly quoted
- *   figure. Smits & Smith's drag rises with S and lies within 0.007 of Bearman & Harvey's
- *   wind-tunnel CD (Aeronautical Quarterly 27, 1976, Figs 7–8) at 55.2 m/s, 2000–3000 rpm;
- * - Lyu et al.'s lift lies within 0.015 of Bearman & Harvey's CL at the same points, where
- *   Smits & Smith's 0.54·S^0.4 is about 0.04 higher (and gives driver apexes well above the
- *   commonly quoted ones).
- * Neither fit has a Reynolds-number term, so the model ignores the drag crisis: it is meant for
- * full swings (ball speed above about 25 m/s), not chips.
- * The choice is pluggable: pass another CoefficientModel to simulateFlight.
+ * Why the modern ball is the default: its drag has the two dependences a real ball's has — it
+ * rises with spin ratio (Bearman & Harvey 1976, Figs 7–8) and it rises steeply below
+ * Re ≈ 1·10⁵, the drag crisis (Jenkins et al. 2018; Lyu et al. 2018) — at the level of a modern
+ * ball (CD ≈ 0.215 at driver launch). The earlier default, Smits & Smith's drag with Lyu's lift
+ * (kept below as "smits-smith-drag-lyu-lift" for comparison), has a 1970s ball's drag level
+ * (0.255 at driver launch) and no Reynolds term: against the published trajectory model it
+ * carried drivers 6–8 % short and wedges 6–10 % long.
+ * The choice is pluggable: pass another CoefficientModel to simulateFlight, or pick one by name.
  */
 
-/** Default coefficient model: Smits & Smith (1994) drag with Lyu et al. (2018) lift. */
-export const defaultCoefficients: CoefficientModel = {
+/**
+ * The earlier default: Smits & Smith (1994) drag, CD = 0.24 + 0.18·S, with Lyu et al. (2018)
+ * lift held at its peak above S ≈ 0.306. Kept for comparison.
+ */
+export const smitsSmithDragLyuLiftCoefficients: CoefficientModel = {
   name: 'smits-smith-drag-lyu-lift',
   source:
     'drag: Smits & Smith, Science and Golf II, 1994; lift: Lyu, Kensrud, Smith & Tosaya, Proceedings 2(6):238, 2018',
   dragCoefficient: (spinRatio) => smitsSmithDragCoefficient(spinRatio),
   liftCoefficient: (spinRatio) => lyuLiftCoefficient(spinRatio),
 };
+
+/** Default coefficient model: the modern ball (modern-ball-coefficients.ts). */
+export const defaultCoefficients: CoefficientModel = modernBallCoefficients;
+
+/** Every coefficient model by name, for comparison (`npm run flight -- --model NAME`). */
+export const COEFFICIENT_MODELS: Readonly<Record<string, CoefficientModel>> = {
+  [modernBallCoefficients.name]: modernBallCoefficients,
+  [smitsSmithDragLyuLiftCoefficients.name]: smitsSmithDragLyuLiftCoefficients,
+  [smitsSmithCoefficients.name]: smitsSmithCoefficients,
+  [lyuCoefficients.name]: lyuCoefficients,
+};
+
+/**
+ * A coefficient model by its name. O(1).
+ * @throws RangeError when no model has that name
+ * @example coefficientModel('smits-smith-drag-lyu-lift').name // => 'smits-smith-drag-lyu-lift'
+ */
+export function coefficientModel(name: string): CoefficientModel {
+  const model = Object.prototype.hasOwnProperty.call(COEFFICIENT_MODELS, name) ? COEFFICIENT_MODELS[name] : undefined;
+  if (!model) throw new RangeError(`no coefficient model "${name}"; known: ${Object.keys(COEFFICIENT_MODELS).join(', ')}`);
+  return model;
+}

@@ -2,6 +2,7 @@ export { resolveAir, type AirConditions, type ResolvedAir, type Wind } from './a
 export { sutherlandViscosityPaS } from './air-viscosity';
 export { ballForces, type UnitVector } from './ball-forces';
 export type { CoefficientModel } from './coefficient-model';
+export type { Conditions } from './conditions';
 export {
   BALL_AREA_M2,
   BALL_DIAMETER_M,
@@ -11,9 +12,30 @@ export {
   RAD_PER_S_PER_RPM,
   STANDARD_GRAVITY_MPS2,
 } from './constants';
-export { defaultCoefficients } from './default-coefficients';
+export {
+  COEFFICIENT_MODELS,
+  coefficientModel,
+  defaultCoefficients,
+  smitsSmithDragLyuLiftCoefficients,
+} from './default-coefficients';
 export { FLIGHT_FIELDS, fillFlightFields, flightFieldValue, type FlightField } from './fill-flight-fields';
 export type { ForceModel } from './force-model';
+export {
+  craterAngleDeg,
+  GROUND_FIRMNESS_PARAMETERS,
+  GROUND_FIRMNESSES,
+  groundRun,
+  TURF_FRICTION,
+  turfBounce,
+  turfRestitution,
+  ROLL_RESISTANCE_SPEED_MPS,
+  ROLL_START_MPS,
+  rollDistanceM,
+  type GroundFirmness,
+  type GroundLanding,
+  type GroundParameters,
+  type GroundRun,
+} from './ground-run';
 export {
   integrateTrajectory,
   type IntegrationOptions,
@@ -24,16 +46,26 @@ export {
 export { launchFromShot, type ShotLaunch } from './launch-from-shot';
 export { launchVectors, type Launch, type LaunchVectors } from './launch-vectors';
 export { LYU_DRAG_BRANCH_SWITCH_RE, lyuCoefficients, lyuDragCoefficient, lyuLiftCoefficient } from './lyu-coefficients';
+export { DRAG_CRISIS_RE, modernBallCoefficients, modernBallDragCoefficient, modernBallLiftCoefficient } from './modern-ball-coefficients';
 export { DEFAULT_CO2_MOLE_FRACTION, moistAirDensityKgM3, saturationVapourPressurePa } from './moist-air-density';
 export { normaliseShot, type NormalisedShot } from './normalise-shot';
 export {
   optimiseLaunch,
   type LaunchOptimum,
+  type LaunchPick,
   type LaunchWindow,
   type OptimiseOptions,
+  type WindowObjective,
   type WindowRow,
 } from './optimise-launch';
-export { reynoldsNumber } from './reynolds-number';
+export {
+  clubWindowAim,
+  DEFAULT_DESCENT_FLOOR_DEG,
+  launchWindowForClub,
+  RUN_MODEL_MIN_DESCENT_DEG,
+  type ClubWindowAim,
+} from './club-launch-window';
+export { reynoldsNumber, reynoldsPerSpeed } from './reynolds-number';
 export { simulateFlight, type FlightOptions, type FlightResult } from './simulate-flight';
 export { smitsSmithCoefficients, smitsSmithDragCoefficient, smitsSmithLiftCoefficient } from './smits-smith-coefficients';
 export { SPIN_DECAY_COEFFICIENT, spinDecayTimeConstantS } from './spin-decay';
@@ -46,3 +78,4 @@ export {
   isaPressurePa,
   isaTemperatureK,
 } from './standard-atmosphere';
+export { GRASS_ROUGHNESS_M, WIND_REFERENCE_HEIGHT_M, windProfileFactor } from './wind-profile';

@@ -83,9 +83,12 @@ function hermiteRoot(p0: number, m0: number, p1: number, m1: number, h: number):
 
 /**
  * Integrate a point mass from launch height until it comes back down to it, with classical
- * fourth-order Runge–Kutta at a fixed step; the landing and the apex are placed inside their
- * step by cubic Hermite interpolation (positions and velocities at both ends of the step, so
- * their error is of the same order as the step's). O(flight time / step) derivative calls
+ * fourth-order Runge–Kutta at a fixed step (the height is part of the state: forces may depend
+ * on it); the landing and the apex are placed inside their step by cubic Hermite interpolation
+ * of positions (from positions and velocities at both ends of the step) and of velocities and
+ * spin (from their values and rates at both ends), so the landing velocity and spin are those at
+ * the ground crossing, not at the end of the step, and their error is of the same order as the
+ * step's. O(flight time / step) derivative calls
  * (four per step).
  * https://en.wikipedia.org/wiki/Runge%E2%80%93Kutta_methods
  * @throws RangeError when the step or time limit is not positive
@@ -108,7 +111,7 @@ export function integrateTrajectory(forces: ForceModel, start: TrajectoryStart, 
   let vz = start.vzMps;
   let w = start.spin ?? 0;
   const k = new Float64Array(4);
-  forces.derivative(vx, vy, vz, w, k);
+  forces.derivative(0, vx, vy, vz, w, k);
   let ax = k[0];
   let ay = k[1];
   let az = k[2];
@@ -131,13 +134,13 @@ export function integrateTrajectory(forces: ForceModel, start: TrajectoryStart, 
     const v1x = vx, v1y = vy, v1z = vz;
     const a1x = ax, a1y = ay, a1z = az, a1w = aw;
     const v2x = vx + half * a1x, v2y = vy + half * a1y, v2z = vz + half * a1z;
-    forces.derivative(v2x, v2y, v2z, w + half * a1w, k);
+    forces.derivative(y + half * v1y, v2x, v2y, v2z, w + half * a1w, k);
     const a2x = k[0], a2y = k[1], a2z = k[2], a2w = k[3];
     const v3x = vx + half * a2x, v3y = vy + half * a2y, v3z = vz + half * a2z;
-    forces.derivative(v3x, v3y, v3z, w + half * a2w, k);
+    forces.derivative(y + half * v2y, v3x, v3y, v3z, w + half * a2w, k);
     const a3x = k[0], a3y = k[1], a3z = k[2], a3w = k[3];
     const v4x = vx + h * a3x, v4y = vy + h * a3y, v4z = vz + h * a3z;
-    forces.derivative(v4x, v4y, v4z, w + h * a3w, k);
+    forces.derivative(y + h * v3y, v4x, v4y, v4z, w + h * a3w, k);
     const a4x = k[0], a4y = k[1], a4z = k[2], a4w = k[3];
 
     const nx = x + sixth * (v1x + 2 * v2x + 2 * v3x + v4x);
@@ -147,7 +150,7 @@ export function integrateTrajectory(forces: ForceModel, start: TrajectoryStart, 
     const nvy = vy + sixth * (a1y + 2 * a2y + 2 * a3y + a4y);
     const nvz = vz + sixth * (a1z + 2 * a2z + 2 * a3z + a4z);
     const nw = w + sixth * (a1w + 2 * a2w + 2 * a3w + a4w);
-    forces.derivative(nvx, nvy, nvz, nw, k);
+    forces.derivative(ny, nvx, nvy, nvz, nw, k);
     const nax = k[0], nay = k[1], naz = k[2], naw = k[3];
 
     if (vy > 0 && nvy <= 0) {

@@ -1,4 +1,5 @@
 import type { ShotValues } from '@/analysis/fields';
+import { RAD_PER_DEG } from './constants';
 import type { Launch } from './launch-vectors';
 
 /** A shot's launch, and whether its sideways inputs were measured. */
@@ -35,7 +36,7 @@ export function launchFromShot(values: ShotValues): ShotLaunch | null {
   if (spinRateRpm < 0) return null;
   let spinAxisDeg = 0;
   if (finite(spinAxis)) spinAxisDeg = spinAxis;
-  else if (pairKnown && (backSpin !== 0 || sideSpin !== 0)) spinAxisDeg = (Math.atan2(sideSpin, backSpin) * 180) / Math.PI;
+  else if (pairKnown && (backSpin !== 0 || sideSpin !== 0)) spinAxisDeg = Math.atan2(sideSpin, backSpin) / RAD_PER_DEG;
   const axisKnown = finite(spinAxis) || pairKnown;
   return {
     launch: {

@@ -1,5 +1,5 @@
 import type { ShotField, ShotValues } from '@/analysis/fields';
-import type { AirConditions } from './air-conditions';
+import type { Conditions } from './conditions';
 import { FLIGHT_FIELDS, flightFieldValue } from './fill-flight-fields';
 import { launchFromShot } from './launch-from-shot';
 import { simulateFlight, type FlightOptions } from './simulate-flight';
@@ -24,7 +24,9 @@ const ADDITIVE: ReadonlySet<ShotField> = new Set<ShotField>(['offline', 'descent
  * - carry, apexHeight and flightTime are scaled by the ratio model(to) / model(from);
  * - offline and descentAngle are shifted by the difference model(to) − model(from) (a ratio is
  *   unstable near zero offline and has no meaning for an angle);
- * - total is shifted by the change of carry (roll is not modelled and is kept as measured).
+ * - total follows: the measured carry's new value plus the measured roll (total − carry) shifted
+ *   by the model's change of roll (the ground firmness of `from` and `to` counts here); a total
+ *   measured without carry is shifted by the model's change of total.
  * Flight fields the shot lacks are filled from the model in `to` (offline only when the
  * launch direction and spin axis are known) and listed as derived. Returns the input
  * unchanged when the launch inputs are missing. O(two trajectories).
@@ -34,8 +36,8 @@ const ADDITIVE: ReadonlySet<ShotField> = new Set<ShotField>(['offline', 'descent
  */
 export function normaliseShot(
   values: ShotValues,
-  from: AirConditions,
-  to: AirConditions,
+  from: Conditions,
+  to: Conditions,
   options?: FlightOptions,
 ): NormalisedShot {
   const shot = launchFromShot(values);
@@ -47,11 +49,12 @@ export function normaliseShot(
   const normalised: ShotField[] = [];
   for (const field of FLIGHT_FIELDS) {
     const measured = values[field];
+    if (field === 'total' && measured !== undefined) continue; // after the loop, once carry is known
     const modelFrom = flightFieldValue(before, field);
     const modelTo = flightFieldValue(after, field);
     if (measured === undefined) {
       if (field === 'offline' && !shot.sideKnown) continue;
-      result[field] = modelTo;
+      result[field] = field === 'total' && values.carry !== undefined ? result.carry! + after.rollM : modelTo;
       derived.push(field);
     } else if (ADDITIVE.has(field)) {
       result[field] = measured + (modelTo - modelFrom);
@@ -61,9 +64,12 @@ export function normaliseShot(
       normalised.push(field);
     }
   }
-  if (values.total !== undefined && values.carry !== undefined && result.carry !== values.carry) {
-    result.total = values.total + (result.carry! - values.carry);
-    normalised.push('total');
+  if (values.total !== undefined) {
+    result.total =
+      values.carry !== undefined
+        ? result.carry! + (values.total - values.carry) + (after.rollM - before.rollM)
+        : values.total + (after.totalM - before.totalM);
+    if (result.total !== values.total) normalised.push('total');
   }
   return { values: result, derived, normalised };
 }

@@ -1,8 +1,10 @@
-import { resolveAir, type AirConditions } from './air-conditions';
+import { resolveAir } from './air-conditions';
 import { ballForces } from './ball-forces';
 import type { CoefficientModel } from './coefficient-model';
+import type { Conditions } from './conditions';
 import { RAD_PER_DEG, RAD_PER_S_PER_RPM } from './constants';
 import { defaultCoefficients } from './default-coefficients';
+import { groundRun } from './ground-run';
 import { integrateTrajectory, type PathPoint } from './integrate-trajectory';
 import { launchVectors, type Launch } from './launch-vectors';
 
@@ -30,6 +32,10 @@ export interface FlightResult {
   landingSpeedMps: number;
   /** Spin rate at landing (rpm). */
   landingSpinRpm: number;
+  /** Distance from the landing point to where the ball stops, along the target line (m); negative when it spins back. */
+  rollM: number;
+  /** carryM + rollM (m). */
+  totalM: number;
   /** Air density used (kg/m³). */
   airDensityKgM3: number;
   /** Path points (m, s), only when `samplePath` was set. */
@@ -38,14 +44,15 @@ export interface FlightResult {
 
 /**
  * Ball flight from launch conditions: a point-mass ball (45.93 g, 42.67 mm) under gravity, drag
- * and lift with spin decay, in air resolved from `air`, integrated by fixed-step RK4 until the
- * ball is back at launch height. O(flight time / step); about 35 steps for a driver at the
- * default step.
+ * and lift with spin decay, in air resolved from `conditions`, integrated by fixed-step RK4 until
+ * the ball is back at launch height; then its run on ground of `conditions.firmness` (default
+ * normal; ground-run.ts) gives roll and total. O(flight time / step); about 35 steps for a driver
+ * at the default step.
  * @throws RangeError when a launch or air value is out of range
- * @example simulateFlight({ ballSpeedMps: 74.65, launchAngleDeg: 10.9, spinRateRpm: 2686 }).carryM // => 236.3
+ * @example simulateFlight({ ballSpeedMps: 74.65, launchAngleDeg: 10.9, spinRateRpm: 2686 }).carryM // => 256.7
  */
-export function simulateFlight(launch: Launch, air: AirConditions = {}, options: FlightOptions = {}): FlightResult {
-  const resolved = resolveAir(air);
+export function simulateFlight(launch: Launch, conditions: Conditions = {}, options: FlightOptions = {}): FlightResult {
+  const resolved = resolveAir(conditions);
   const vectors = launchVectors(launch);
   const forces = ballForces(resolved, options.model ?? defaultCoefficients, vectors.spinAxis);
   const result = integrateTrajectory(
@@ -54,6 +61,15 @@ export function simulateFlight(launch: Launch, air: AirConditions = {}, options:
     { stepS: options.stepS, samplePath: options.samplePath },
   );
   const horizontalMps = Math.hypot(result.landingVxMps, result.landingVzMps);
+  // The run along the landing heading ψ, with the back spin about the horizontal axis across it.
+  let rollM = 0;
+  if (result.flightTimeS > 0 && result.landingVyMps < 0) {
+    const cosPsi = horizontalMps > 0 ? result.landingVxMps / horizontalMps : 1;
+    const sinPsi = horizontalMps > 0 ? result.landingVzMps / horizontalMps : 0;
+    const across = vectors.spinAxis.z * cosPsi - vectors.spinAxis.x * sinPsi;
+    const run = groundRun({ horizontalMps, verticalMps: result.landingVyMps, backSpinRadS: result.landingSpin * across }, conditions.firmness);
+    rollM = run.runM * cosPsi;
+  }
   const flight: FlightResult = {
     carryM: result.xM,
     offlineM: result.zM,
@@ -62,6 +78,8 @@ export function simulateFlight(launch: Launch, air: AirConditions = {}, options:
     descentAngleDeg: Math.atan2(-result.landingVyMps, horizontalMps) / RAD_PER_DEG,
     landingSpeedMps: Math.hypot(horizontalMps, result.landingVyMps),
     landingSpinRpm: result.landingSpin / RAD_PER_S_PER_RPM,
+    rollM,
+    totalM: result.xM + rollM,
     airDensityKgM3: resolved.densityKgM3,
   };
   if (result.path) flight.path = result.path;

@@ -2,7 +2,7 @@ import type { CoefficientModel } from './coefficient-model';
 
 /*
  * Smits & Smith, "A new aerodynamic model of a golf ball in flight", Science and Golf II (1994),
- * as quoted (secondary, from memory in CHECKS.md): CD ≈ 0.24 + 0.18·S, CL ≈ 0.54·S^0.4, fitted
+ * as quoted by secondary sources (from memory): CD ≈ 0.24 + 0.18·S, CL ≈ 0.54·S^0.4, fitted
  * for 0.08 < S < 0.2 at Reynolds numbers above the drag crisis. Used unchanged outside that
  * range.
  */

@@ -63,7 +63,7 @@ export function AnalysisPanel({ fitting }: AnalysisPanelProps) {
     <View style={styles.panel}>
       {to ? (
         <Notice tone="info" title="Carried over to the course">
-          {`Figures as the ball-flight model expects them at ${to.altitudeM ?? 0} m, ${to.temperatureC ?? 15} °C${to.humidityPct !== undefined ? `, ${to.humidityPct} % humidity` : ''}; measured in the bay at ${air.measured.altitudeM ?? 0} m, ${air.measured.temperatureC ?? 15} °C.`}
+          {`Figures as the ball-flight model expects them at ${to.altitudeM ?? 0} m, ${to.temperatureC ?? 15} °C${to.humidityPct !== undefined ? `, ${to.humidityPct} % humidity` : ''}, ${to.firmness ?? 'normal'} ground; measured in the bay at ${air.measured.altitudeM ?? 0} m, ${air.measured.temperatureC ?? 15} °C.`}
         </Notice>
       ) : null}
       <ChipRow label="Club" value={chosen} options={clubs.map((c) => ({ value: c, label: clubInfo(c)?.label ?? c }))} onChange={setClub} />
@@ -93,7 +93,7 @@ export function AnalysisPanel({ fitting }: AnalysisPanelProps) {
       ) : null}
       {chosen ? (
         <Section title="Launch window">
-          <LaunchWindowSection shots={shots.filter((s) => s.club === chosen)} ballSpeedMps={ballSpeed} air={air.measured} units={units} />
+          <LaunchWindowSection shots={shots.filter((s) => s.club === chosen)} ballSpeedMps={ballSpeed} air={air.normalisedTo ?? air.measured} units={units} club={chosen} />
         </Section>
       ) : null}
       <Section title="Ladder">

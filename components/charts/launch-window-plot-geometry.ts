@@ -11,7 +11,8 @@ import { distanceUnit, formatNumber, formatThousands } from './chart-format';
 import type { GridLine, LaunchPoint, PlotBox } from './chart-types';
 
 export type LaunchWindowInput = {
-  optimum: Pick<LaunchOptimum, 'best' | 'window'>;
+  /** The window to draw; null for a club without one (a wedge): the shots alone. */
+  optimum: Pick<LaunchOptimum, 'best' | 'window' | 'objective'> | null;
   points: readonly LaunchPoint[];
   units: UnitSystem;
   widthPx: number;
@@ -27,28 +28,42 @@ export type LaunchWindowGeometry = {
   /** The window's outline, closed; null when the window is empty. */
   windowPath: string | null;
   windowPoints: [number, number][];
-  best: { x: number; y: number; label: string };
+  best: { x: number; y: number; label: string } | null;
   dots: { key: string; x: number; y: number }[];
 };
 
 export const LAUNCH_MARGIN = { top: 28, right: 24, bottom: 40, left: 40 } as const;
 
 /**
- * Everything the launch window plot draws, in px. The domain holds the window, the best launch
- * and every finite point with 8% padding, rounded out to d3's nice ticks; the height is
- * clamp(0.62 × width, 240, 420). O(window rows + points).
+ * Everything the launch window plot draws, in px. The domain holds the whole window outline
+ * (tips included: it is never cut at the plot's edge), the best launch and every finite point,
+ * with 8% padding, rounded out to d3's nice ticks; the height is clamp(0.62 × width, 240, 420).
+ * O(window rows + points).
  * @throws RangeError when widthPx is not a positive number
  * @example launchWindowGeometry({ optimum: optimiseLaunch(74.65), points, units: 'imperial', widthPx: 390 }).best.label
  */
 export function launchWindowGeometry(input: LaunchWindowInput): LaunchWindowGeometry {
   if (!(input.widthPx > 0) || !Number.isFinite(input.widthPx)) throw new RangeError('launchWindowGeometry needs a positive width');
-  const { best, window } = input.optimum;
+  const best = input.optimum?.best ?? null;
+  const polygon = input.optimum?.window.polygon ?? [];
   const points = input.points.filter((p) => Number.isFinite(p.launchAngleDeg) && Number.isFinite(p.spinRateRpm));
-  const spins = [best.spinRateRpm, ...window.polygon.map((p) => p.spinRateRpm), ...points.map((p) => p.spinRateRpm)];
-  const launches = [best.launchAngleDeg, ...window.polygon.map((p) => p.launchAngleDeg), ...points.map((p) => p.launchAngleDeg)];
+  const spins: number[] = [];
+  const launches: number[] = [];
+  for (const p of [...(best ? [best] : []), ...polygon, ...points]) {
+    spins.push(p.spinRateRpm);
+    launches.push(p.launchAngleDeg);
+  }
+  if (spins.length === 0) {
+    spins.push(2000, 6000);
+    launches.push(10, 20);
+  }
   const padded = (values: number[], minSpan: number): [number, number] => {
-    const lo = Math.min(...values);
-    const hi = Math.max(...values);
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (const v of values) {
+      if (v < lo) lo = v;
+      if (v > hi) hi = v;
+    }
     const span = Math.max(hi - lo, minSpan);
     const mid = (lo + hi) / 2;
     return [mid - span * 0.54, mid + span * 0.54];
@@ -59,10 +74,10 @@ export function launchWindowGeometry(input: LaunchWindowInput): LaunchWindowGeom
   const spinTickCount = input.widthPx < 500 ? 4 : 8;
   const x = scaleLinear().domain(padded(spins, 1000)).range([plot.left, plot.right]).nice(spinTickCount);
   const y = scaleLinear().domain(padded(launches, 4)).range([plot.bottom, plot.top]).nice(5);
-  const windowPoints = window.polygon.map((p) => [x(p.spinRateRpm), y(p.launchAngleDeg)] as [number, number]);
+  const windowPoints = polygon.map((p) => [x(p.spinRateRpm), y(p.launchAngleDeg)] as [number, number]);
   const toPath = line().curve(curveLinearClosed).digits(2);
   const unit = distanceUnit(input.units);
-  const carry = formatNumber(fromCanonical(best.carryM, unit, 'carry'));
+  const aim = input.optimum?.objective === 'total' ? 'total' : 'carry';
   return {
     widthPx: input.widthPx,
     heightPx,
@@ -72,11 +87,13 @@ export function launchWindowGeometry(input: LaunchWindowInput): LaunchWindowGeom
     launchTicks: y.ticks(5).map((v) => ({ value: v, px: y(v), label: `${formatNumber(v, Number.isInteger(v) ? 0 : 1)}°` })),
     windowPath: windowPoints.length >= 3 ? toPath(windowPoints) : null,
     windowPoints,
-    best: {
-      x: x(best.spinRateRpm),
-      y: y(best.launchAngleDeg),
-      label: `Best ${formatNumber(best.launchAngleDeg, 1)}°, ${formatThousands(best.spinRateRpm)} rpm, ${carry} ${unit} carry`,
-    },
+    best: best
+      ? {
+          x: x(best.spinRateRpm),
+          y: y(best.launchAngleDeg),
+          label: `Best ${formatNumber(best.launchAngleDeg, 1)}°, ${formatThousands(best.spinRateRpm)} rpm, ${formatNumber(fromCanonical(aim === 'total' ? best.totalM : best.carryM, unit, 'carry'))} ${unit} ${aim}`,
+        }
+      : null,
     dots: points.map((p, i) => ({ key: p.id ?? String(i), x: x(p.spinRateRpm), y: y(p.launchAngleDeg) })),
   };
 }

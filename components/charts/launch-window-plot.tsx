@@ -9,24 +9,26 @@ import type { LaunchPoint } from './chart-types';
 import { launchWindowGeometry } from './launch-window-plot-geometry';
 
 export type LaunchWindowPlotProps = {
-  /** From optimiseLaunch(ballSpeedMps) for the club's ball speed. */
-  optimum: Pick<LaunchOptimum, 'best' | 'window'>;
+  /** From launchWindowForClub / optimiseLaunch for the club's ball speed; null: shots only (a wedge). */
+  optimum: Pick<LaunchOptimum, 'best' | 'window' | 'objective'> | null;
   /** The player's shots of one club: launch angle and spin rate. */
   points: readonly LaunchPoint[];
   units: UnitSystem;
   /** The chart's width in px (measure it with onLayout). */
   widthPx: number;
-  /** Share of the best carry the window holds, for the legend; default 1 (%). */
+  /** Share of the best the window holds, for the legend; default 1 (%). */
   withinPct?: number;
 };
 
 const small = { fontFamily: fonts.regular, fontSize: 11, fill: chartColors.axisText } as const;
 
-/** Launch angle against spin rate: the window near the best carry, the best launch, the shots. */
+/** Launch angle against spin rate: the window near the best carry or total, the best launch, the shots. */
 export function LaunchWindowPlot({ optimum, points, units, widthPx, withinPct = 1 }: LaunchWindowPlotProps) {
   const g = launchWindowGeometry({ optimum, points, units, widthPx });
   const { plot, best } = g;
-  const summary = `Launch window: ${g.best.label}; ${points.length} ${points.length === 1 ? 'shot' : 'shots'} plotted`;
+  const shotsText = `${points.length} ${points.length === 1 ? 'shot' : 'shots'} plotted`;
+  const summary = best ? `Launch window: ${best.label}; ${shotsText}` : `Launch and spin: ${shotsText}`;
+  const aim = optimum?.objective === 'total' ? 'total' : 'carry';
   return (
     <View accessible accessibilityRole="image" accessibilityLabel={summary}>
       <Svg width={g.widthPx} height={g.heightPx}>
@@ -48,13 +50,21 @@ export function LaunchWindowPlot({ optimum, points, units, widthPx, withinPct = 
         {g.dots.map((d) => (
           <Circle key={d.key} testID="launch-dot" cx={d.x} cy={d.y} r={4} fill={chartColors.points} fillOpacity={0.7} />
         ))}
-        <Path d={`M${best.x - 7},${best.y}H${best.x + 7}M${best.x},${best.y - 7}V${best.y + 7}`} stroke={chartColors.best} strokeWidth={3} />
-        <Circle cx={best.x} cy={best.y} r={9} fill="none" stroke={chartColors.best} strokeWidth={1.5} />
+        {best ? (
+          <G>
+            <Path d={`M${best.x - 7},${best.y}H${best.x + 7}M${best.x},${best.y - 7}V${best.y + 7}`} stroke={chartColors.best} strokeWidth={3} />
+            <Circle cx={best.x} cy={best.y} r={9} fill="none" stroke={chartColors.best} strokeWidth={1.5} />
+          </G>
+        ) : null}
       </Svg>
       <ChartLegend
         items={[
-          { key: 'window', label: `Within ${withinPct}% of the best carry`, color: chartColors.window, shape: 'square' },
-          { key: 'best', label: g.best.label, color: chartColors.best },
+          ...(best
+            ? [
+                { key: 'window', label: `Within ${withinPct}% of the best ${aim}`, color: chartColors.window, shape: 'square' as const },
+                { key: 'best', label: best.label, color: chartColors.best },
+              ]
+            : []),
           { key: 'shots', label: 'Shots', color: colors.ink },
         ]}
       />

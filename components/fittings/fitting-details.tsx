@@ -20,6 +20,7 @@ export function FittingDetails({ fitting }: FittingDetailsProps) {
           { label: 'Temperature', value: withUnit(fitting.temperatureC, '°C') },
           { label: 'Altitude', value: withUnit(fitting.altitudeM, 'm') },
           { label: 'Humidity', value: withUnit(fitting.humidityPct, '%') },
+          { label: 'Ground', value: fitting.groundFirmness ? `${fitting.groundFirmness[0].toUpperCase()}${fitting.groundFirmness.slice(1)}` : null },
           { label: 'Ball', value: fitting.ball },
           { label: 'Shots', value: plural(fitting.shotCount, 'shot') },
           { label: 'Notes', value: fitting.notes },

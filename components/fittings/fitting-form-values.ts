@@ -10,6 +10,8 @@ export type FittingFormText = {
   temperatureC: string;
   altitudeM: string;
   humidityPct: string;
+  /** '' when not stated (the model then takes normal ground). */
+  groundFirmness: '' | 'soft' | 'normal' | 'firm';
   ball: string;
   notes: string;
   remote: boolean;
@@ -24,6 +26,7 @@ export function fittingFormText(fitting?: Fitting, defaults: { playerId?: string
     temperatureC: numberText(fitting?.temperatureC),
     altitudeM: numberText(fitting?.altitudeM),
     humidityPct: numberText(fitting?.humidityPct),
+    groundFirmness: fitting?.groundFirmness ?? '',
     ball: fitting?.ball ?? '',
     notes: fitting?.notes ?? '',
     remote: fitting?.remote ?? false,
@@ -44,6 +47,7 @@ export function parseFittingForm(text: FittingFormText): FittingFormResult {
     date: text.date.trim(),
     venue: text.venue,
     ...numbers.values,
+    groundFirmness: text.groundFirmness === '' ? null : text.groundFirmness,
     ball: text.ball,
     notes: text.notes,
     remote: text.remote,

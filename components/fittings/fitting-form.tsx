@@ -24,6 +24,13 @@ type FittingFormProps = {
   onCancel: () => void;
 };
 
+const FIRMNESS = [
+  { value: '', label: 'Not stated' },
+  { value: 'soft', label: 'Soft' },
+  { value: 'normal', label: 'Normal' },
+  { value: 'firm', label: 'Firm' },
+] as const;
+
 const VENUES = [
   { value: 'indoor', label: 'Indoor bay' },
   { value: 'outdoor', label: 'Outdoor range' },
@@ -72,6 +79,7 @@ export function FittingForm({ fitting, playerId, submitTitle, busy, error, onSub
           inputMode="decimal"
         />
       </FormRow>
+      <ChoiceField label="Ground" value={text.groundFirmness} options={FIRMNESS} onChange={set('groundFirmness')} />
       <TextField label="Notes" value={text.notes} onChangeText={set('notes')} error={shown.notes} multiline numberOfLines={4} />
       <SwitchField
         label="Remote fitting"

@@ -1,4 +1,5 @@
 import { ScrollView, StyleSheet, View } from 'react-native';
+import { clubInfo } from '@/analysis/clubs';
 import type { Shot } from '@/analysis/fields';
 import type { UnitSystem } from '@/analysis/units';
 import { plural } from '../format';
@@ -47,6 +48,9 @@ export function PreviewShots({ shots, total, units }: PreviewShotsProps) {
       {shots.some((s) => columns.some((c) => s.derived.includes(c.field))) ? (
         <AppText variant="caption" tone="muted">
           * computed, not in the file.
+          {shots.some((s) => clubInfo(s.club)?.kind === 'wedge' && s.derived.length > 0)
+            ? ' Wedge values computed by the ball-flight model are the least certain: slow, high flights meet the drag crisis, where balls differ most.'
+            : ''}
         </AppText>
       ) : null}
     </View>

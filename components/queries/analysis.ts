@@ -10,7 +10,7 @@ export type AnalysisParams = {
   /** Two groups to compare, each "CLUB|BUILD". */
   compare: [string, string] | null;
   /** Course conditions to carry the figures over to. */
-  to: { altitudeM?: number; temperatureC?: number; humidityPct?: number } | null;
+  to: { altitudeM?: number; temperatureC?: number; humidityPct?: number; firmness?: 'soft' | 'normal' | 'firm' } | null;
 };
 
 export const analysisKeys = {
@@ -29,6 +29,7 @@ export const getFittingAnalysis = (fittingId: string, p: AnalysisParams) =>
     toAltitudeM: num(p.to?.altitudeM),
     toTemperatureC: num(p.to?.temperatureC),
     toHumidityPct: num(p.to?.humidityPct),
+    toFirmness: p.to?.firmness,
   });
 
 export const fittingAnalysisQuery = (fittingId: string, p: AnalysisParams) =>

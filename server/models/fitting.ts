@@ -13,6 +13,7 @@ export class Fitting extends Model<InferAttributes<Fitting>, InferCreationAttrib
   declare temperatureC: number | null;
   declare altitudeM: number | null;
   declare humidityPct: number | null;
+  declare groundFirmness: 'soft' | 'normal' | 'firm' | null;
   declare ball: string | null;
   declare notes: string | null;
   declare remote: CreationOptional<boolean>;
@@ -31,6 +32,7 @@ export class Fitting extends Model<InferAttributes<Fitting>, InferCreationAttrib
         temperatureC: { type: DataTypes.DOUBLE, allowNull: true },
         altitudeM: { type: DataTypes.DOUBLE, allowNull: true },
         humidityPct: { type: DataTypes.DOUBLE, allowNull: true },
+        groundFirmness: { type: DataTypes.ENUM('soft', 'normal', 'firm'), allowNull: true },
         ball: { type: DataTypes.STRING(120), allowNull: true },
         notes: { type: DataTypes.TEXT, allowNull: true },
         remote: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },

@@ -16,8 +16,8 @@ export function shotsRouter(sequelize: Sequelize): Router {
   router.get('/fittings/:id/analysis', async (req, res) => {
     const { id } = idParamsSchema.parse(req.params);
     const q = analysisQuerySchema.parse(req.query);
-    const hasTo = q.toTemperatureC !== undefined || q.toAltitudeM !== undefined || q.toHumidityPct !== undefined;
-    const to = hasTo ? { temperatureC: q.toTemperatureC, altitudeM: q.toAltitudeM, humidityPct: q.toHumidityPct } : undefined;
+    const hasTo = q.toTemperatureC !== undefined || q.toAltitudeM !== undefined || q.toHumidityPct !== undefined || q.toFirmness !== undefined;
+    const to = hasTo ? { temperatureC: q.toTemperatureC, altitudeM: q.toAltitudeM, humidityPct: q.toHumidityPct, firmness: q.toFirmness } : undefined;
     res.json(await analyseFitting(sequelize, actorOf(res), id, { units: actorOf(res).units, level: q.level, includeStrays: q.all, compare: q.a && q.b ? [q.a, q.b] : undefined, to }));
   });
   router.patch('/shots/:shotId', async (req, res) => {

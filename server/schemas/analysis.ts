@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import type { AirConditions } from '../../analysis/flight/air-conditions';
+import type { Conditions } from '../../analysis/flight/conditions';
+import { groundFirmnessSchema } from './fittings';
 import type { SessionAnalysis } from '../../analysis/session/session-types';
 
 /** One shot as the dispersion plot needs it (canonical units). */
@@ -23,8 +24,8 @@ export interface PlotShot {
 /** GET /api/fittings/:id/analysis */
 export interface FittingAnalysis {
   analysis: SessionAnalysis;
-  /** The fitting's measured air, and the conditions the figures were carried over to (if any). */
-  air: { measured: AirConditions; normalisedTo: AirConditions | null };
+  /** The fitting's measured air and ground, and the conditions the figures were carried over to (if any). */
+  air: { measured: Conditions; normalisedTo: Conditions | null };
   shots: PlotShot[];
 }
 
@@ -49,5 +50,6 @@ export const analysisQuerySchema = z
     toTemperatureC: z.coerce.number().min(-20).max(50).optional(),
     toAltitudeM: z.coerce.number().min(-430).max(4500).optional(),
     toHumidityPct: z.coerce.number().min(0).max(100).optional(),
+    toFirmness: groundFirmnessSchema.optional(),
   })
   .refine((q) => (q.a === undefined) === (q.b === undefined), { message: 'Give both builds to compare (a and b).', path: ['b'] });

@@ -2,6 +2,8 @@ import { z } from 'zod';
 import { optionalText } from './common';
 
 export const venueSchema = z.enum(['indoor', 'outdoor']);
+/** Ground firmness of a fitting (ball-flight model: roll and total). */
+export const groundFirmnessSchema = z.enum(['soft', 'normal', 'firm'], { message: 'Ground firmness is soft, normal or firm.' });
 
 const nullableNumber = (min: number, max: number, message?: string) =>
   z.number().min(min, message).max(max, message).nullish().transform((v) => v ?? null);
@@ -14,6 +16,7 @@ const fittingFields = {
   temperatureC: nullableNumber(-20, 50, 'Temperature must be between −20 and 50 °C.'),
   altitudeM: nullableNumber(-430, 4500, 'Altitude must be between −430 and 4,500 m.'),
   humidityPct: nullableNumber(0, 100, 'Humidity is a percentage, 0 to 100.'),
+  groundFirmness: groundFirmnessSchema.nullish().transform((v) => v ?? null),
   ball: optionalText(120),
   notes: optionalText(4000),
   /** A remote fitting: the player may upload their own bay files. */
@@ -42,6 +45,7 @@ export const fittingSchema = z.object({
   temperatureC: z.number().nullable(),
   altitudeM: z.number().nullable(),
   humidityPct: z.number().nullable(),
+  groundFirmness: groundFirmnessSchema.nullable(),
   ball: z.string().nullable(),
   notes: z.string().nullable(),
   remote: z.boolean(),

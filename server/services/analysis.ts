@@ -5,7 +5,7 @@
  */
 import type { Sequelize } from 'sequelize';
 import type { Shot } from '../../analysis/fields';
-import { normaliseShot, type AirConditions } from '../../analysis/flight';
+import { normaliseShot, type Conditions } from '../../analysis/flight';
 import { fromCanonical } from '../../analysis/units';
 import { analyseSession, type GroupRef, type SessionAnalysis } from '../../analysis/session';
 import { HttpError } from '../errors';
@@ -22,8 +22,8 @@ export interface AnalysisQuery {
   compare?: [GroupRef, GroupRef];
   /** Units of the distances written in stray reasons (the user's preference). */
   units?: 'imperial' | 'metric';
-  /** Carry the shots over to these conditions (the player's course) with the ball-flight model. */
-  to?: AirConditions;
+  /** Carry the shots over to these conditions (the player's course: air and ground) with the ball-flight model. */
+  to?: Conditions;
 }
 
 export async function analyseFitting(sequelize: Sequelize, actor: Actor, fittingId: string, query: AnalysisQuery): Promise<FittingAnalysis> {

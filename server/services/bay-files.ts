@@ -5,7 +5,7 @@
 import { createHash } from 'node:crypto';
 import type { Sequelize, Transaction } from 'sequelize';
 import type { Shot, ShotValues } from '../../analysis/fields';
-import { fillFlightFields, type AirConditions } from '../../analysis/flight';
+import { fillFlightFields, type Conditions } from '../../analysis/flight';
 import { ImportError, importBayFile, recipeSchema, type ImportResult, type Recipe } from '../../analysis/import';
 import { HttpError, notFound } from '../errors';
 import { BayFile, Build, Fitting, Recipe as RecipeModel } from '../models';
@@ -87,9 +87,10 @@ function buildOptions(builds: BuildAssignment): { defaultBuild: string | null; b
   return { defaultBuild: builds.fallback ?? null };
 }
 
-/** The air of a fitting, for the ball-flight model (unset values: the standard atmosphere). */
-export function airOf(fitting: Pick<Fitting, 'temperatureC' | 'altitudeM' | 'humidityPct'>): AirConditions {
+/** The air and ground of a fitting, for the ball-flight model (unset values: the standard atmosphere, normal ground). */
+export function airOf(fitting: Pick<Fitting, 'temperatureC' | 'altitudeM' | 'humidityPct' | 'groundFirmness'>): Conditions {
   return {
+    ...(fitting.groundFirmness != null ? { firmness: fitting.groundFirmness } : {}),
     ...(fitting.temperatureC != null ? { temperatureC: fitting.temperatureC } : {}),
     ...(fitting.altitudeM != null ? { altitudeM: fitting.altitudeM } : {}),
     ...(fitting.humidityPct != null ? { humidityPct: fitting.humidityPct } : {}),
@@ -98,10 +99,10 @@ export function airOf(fitting: Pick<Fitting, 'temperatureC' | 'altitudeM' | 'hum
 
 /**
  * Runs the import library, mapping its errors to 400s a fitter can read. Shots with launch
- * conditions but no carry, offline, apex, descent or flight time get them from the
- * ball-flight model in the fitting's air, marked as derived.
+ * conditions but no carry, total, offline, apex, descent or flight time get them from the
+ * ball-flight model in the fitting's air and on its ground, marked as derived.
  */
-export function runImport(text: string, recipe: Recipe | undefined, builds: BuildAssignment, limits: BayFileLimits, air: AirConditions = {}): ImportResult {
+export function runImport(text: string, recipe: Recipe | undefined, builds: BuildAssignment, limits: BayFileLimits, air: Conditions = {}): ImportResult {
   if (countLines(text) > limits.maxRows + 50) {
     throw new HttpError(400, 'TOO_MANY_ROWS', `This file has more than ${limits.maxRows.toLocaleString('en')} rows, the most one import takes. Split it and import the parts.`);
   }

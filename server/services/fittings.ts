@@ -27,6 +27,7 @@ export function toFitting(f: FittingModel, shotCount = 0): Fitting {
     temperatureC: f.temperatureC,
     altitudeM: f.altitudeM,
     humidityPct: f.humidityPct,
+    groundFirmness: f.groundFirmness ?? null,
     ball: f.ball,
     notes: f.notes,
     remote: f.remote,
@@ -85,6 +86,7 @@ export async function createFitting(actor: Actor, body: z.output<typeof fittingB
     temperatureC: body.temperatureC,
     altitudeM: body.altitudeM,
     humidityPct: body.humidityPct,
+    groundFirmness: body.groundFirmness,
     ball: body.ball,
     notes: body.notes,
     remote: body.remote,
@@ -96,8 +98,8 @@ export async function updateFitting(actor: Actor, id: string, body: z.output<typ
   requireStaff(actor);
   const fitting = await findVisibleFitting(actor, id);
   if (body.fitterId) await checkFitter(actor, body.fitterId);
-  const { fitterId, date, venue, temperatureC, altitudeM, humidityPct, ball, notes, remote } = body;
-  const changes = { fitterId, date, venue, temperatureC, altitudeM, humidityPct, ball, notes, remote };
+  const { fitterId, date, venue, temperatureC, altitudeM, humidityPct, groundFirmness, ball, notes, remote } = body;
+  const changes = { fitterId, date, venue, temperatureC, altitudeM, humidityPct, groundFirmness, ball, notes, remote };
   for (const [key, value] of Object.entries(changes)) {
     if (value !== undefined) fitting.set(key as keyof typeof changes, value as never);
   }

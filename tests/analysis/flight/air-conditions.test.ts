@@ -9,14 +9,16 @@ describe('resolveAir', () => {
     expect(Math.abs(air.densityKgM3 / 1.225 - 1)).toBeLessThan(5e-4); // CIPM-2007 vs the ideal gas of ISO 2533
     expect(air.windXMps).toBe(0);
   });
-  // ISO 2533, 1609.344 m: 83 427.6 Pa, 1.04662 kg/m³ (CHECKS.md); CIPM-2007 dry air at the same
+  // ISO 2533:1975 standard atmosphere, 1609.344 m: 83 427.6 Pa, 1.04662 kg/m³ (computed from its
+  // troposphere formula); CIPM-2007 dry air at the same
   // pressure and temperature agrees within 0.05 %.
   it('resolveAir at 1609.344 m takes the standard pressure and temperature of that altitude', () => {
     const air = resolveAir({ altitudeM: 1609.344 });
     expect(air.pressurePa).toBeCloseTo(83427.6, 1);
     expect(Math.abs(air.densityKgM3 / isaDensityKgM3(1609.344) - 1)).toBeLessThan(5e-4);
   });
-  // CIPM-2007 example (CHECKS.md): 20 °C, 101 325 Pa, 50 % RH → 1.19931 kg/m³.
+  // Picard et al., "Revised formula for the density of moist air (CIPM-2007)", Metrologia
+  // 45:149 (2008), computed from its formula: 20 °C, 101 325 Pa, 50 % RH → 1.19931 kg/m³.
   it('resolveAir with temperature and humidity at sea level gives the CIPM-2007 density', () => {
     expect(resolveAir({ temperatureC: 20, humidityPct: 50 }).densityKgM3).toBeCloseTo(1.19931, 5);
   });

@@ -1,7 +1,7 @@
 import { reynoldsNumber, sutherlandViscosityPaS } from '@/analysis/flight';
 
 // Sutherland's law with the ISO 2533 constants, μ = 1.458e-6·T^1.5/(T + 110.4); values computed
-// from the formula (CHECKS.md, "Air"). ISO 2533 tabulates 1.7894e-5 Pa·s at sea level.
+// from the formula (ISO 2533:1975, Sutherland's law with βs = 1.458e-6, S = 110.4 K). ISO 2533 tabulates 1.7894e-5 Pa·s at sea level.
 describe('sutherlandViscosityPaS', () => {
   it('sutherlandViscosityPaS at 288.15 K gives 1.78938e-5 Pa·s', () => {
     expect(sutherlandViscosityPaS(288.15) / 1.78938e-5).toBeCloseTo(1, 5);

@@ -3,11 +3,12 @@ import { fillFlightFields, simulateFlight } from '@/analysis/flight';
 const launch = { ballSpeed: 74.65, launchAngle: 10.9, spinRate: 2686 };
 
 describe('fillFlightFields', () => {
-  it('fillFlightFields with launch only fills carry, apex, descent and flight time from the model', () => {
+  it('fillFlightFields with launch only fills carry, total, apex, descent and flight time from the model', () => {
     const { values, derived } = fillFlightFields(launch);
     const flight = simulateFlight({ ballSpeedMps: 74.65, launchAngleDeg: 10.9, spinRateRpm: 2686 });
-    expect(derived).toEqual(['carry', 'apexHeight', 'descentAngle', 'flightTime']);
+    expect(derived).toEqual(['carry', 'total', 'apexHeight', 'descentAngle', 'flightTime']);
     expect(values.carry).toBe(flight.carryM);
+    expect(values.total).toBe(flight.totalM);
     expect(values.apexHeight).toBe(flight.apexHeightM);
     expect(values.descentAngle).toBe(flight.descentAngleDeg);
     expect(values.flightTime).toBe(flight.flightTimeS);
@@ -25,8 +26,14 @@ describe('fillFlightFields', () => {
     const { values, derived } = fillFlightFields(input);
     expect(values.carry).toBe(250);
     expect(values.flightTime).toBe(6.9);
-    expect(derived).toEqual(['apexHeight', 'descentAngle']);
+    expect(derived).toEqual(['total', 'apexHeight', 'descentAngle']);
     expect(input).toEqual({ ...launch, carry: 250, flightTime: 6.9 });
+  });
+  it('fillFlightFields with a measured carry fills total as that carry plus the model’s roll on the stated ground', () => {
+    const { values } = fillFlightFields({ ...launch, carry: 250 }, { firmness: 'firm' });
+    const flight = simulateFlight({ ballSpeedMps: 74.65, launchAngleDeg: 10.9, spinRateRpm: 2686 }, { firmness: 'firm' });
+    expect(values.total).toBeCloseTo(250 + flight.rollM, 10);
+    expect(flight.rollM).toBeGreaterThan(simulateFlight({ ballSpeedMps: 74.65, launchAngleDeg: 10.9, spinRateRpm: 2686 }, { firmness: 'soft' }).rollM);
   });
   it('fillFlightFields in thinner air fills a longer carry', () => {
     expect(fillFlightFields(launch, { altitudeM: 1800 }).values.carry!).toBeGreaterThan(fillFlightFields(launch).values.carry!);
@@ -38,7 +45,7 @@ describe('fillFlightFields', () => {
     expect(result.derived).toEqual([]);
   });
   it('fillFlightFields with every flight field present returns the input unchanged', () => {
-    const input = { ...launch, carry: 1, offline: 0, apexHeight: 1, descentAngle: 1, flightTime: 1 };
+    const input = { ...launch, carry: 1, total: 1, offline: 0, apexHeight: 1, descentAngle: 1, flightTime: 1 };
     expect(fillFlightFields(input).values).toBe(input);
   });
 });

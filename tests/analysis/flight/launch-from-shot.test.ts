@@ -1,6 +1,6 @@
 import { launchFromShot } from '@/analysis/flight';
 
-// PRODUCT.md, "Canonical data": spinAxis = atan2(sideSpin, backSpin), spinRate = hypot(backSpin, sideSpin).
+// The product's canonical-data definitions (analysis/fields.ts): spinAxis = atan2(sideSpin, backSpin), spinRate = hypot(backSpin, sideSpin).
 describe('launchFromShot', () => {
   it('launchFromShot with back and side spin derives the spin rate and axis', () => {
     const shot = launchFromShot({ ballSpeed: 70, launchAngle: 12, backSpin: 2800, sideSpin: -300, launchDirection: 1.5 })!;

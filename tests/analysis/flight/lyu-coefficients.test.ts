@@ -1,7 +1,7 @@
 import { LYU_DRAG_BRANCH_SWITCH_RE, lyuCoefficients, lyuDragCoefficient, lyuLiftCoefficient } from '@/analysis/flight';
 
 // Lyu, Kensrud, Smith & Tosaya, "Aerodynamics of Golf Balls in Still Air", Proceedings 2(6):238
-// (2018), fits averaged over 13 balls (secondary, CHECKS.md). Values are the fits' exact arithmetic.
+// (2018), fits averaged over 13 balls (secondary: read through quotations of the paper). Values are the fits' exact arithmetic.
 describe('lyuLiftCoefficient', () => {
   it.each([
     [0.1, 0.1665],

@@ -1,7 +1,7 @@
 import { isaDensityKgM3, moistAirDensityKgM3, saturationVapourPressurePa } from '@/analysis/flight';
 
 // Picard, Davis, Gläser & Fujii, "Revised formula for the density of moist air (CIPM-2007)",
-// Metrologia 45:149 (2008); values computed from the published formula (CHECKS.md, "Air").
+// Metrologia 45:149 (2008); values computed from the published formula.
 describe('moistAirDensityKgM3', () => {
   it('moistAirDensityKgM3 at 20 °C, 101 325 Pa, 50 % RH gives 1.19931 kg/m³', () => {
     expect(moistAirDensityKgM3(293.15, 101325, 50)).toBeCloseTo(1.19931, 5);

@@ -24,20 +24,33 @@ describe('normaliseShot', () => {
     expect(values.offline).toBeCloseTo(4 + after.offlineM - before.offlineM, 10);
     expect(values.descentAngle).toBeCloseTo(38 + after.descentAngleDeg - before.descentAngleDeg, 10);
   });
-  it('normaliseShot shifts total by the change of carry', () => {
+  it('normaliseShot moves total with the normalised carry and the model’s change of roll', () => {
     const { values, normalised } = normaliseShot({ ...launch, carry: 230, total: 255 }, bay, course);
-    expect(values.total! - 255).toBeCloseTo(values.carry! - 230, 10);
+    const before = simulateFlight(modelLaunch, bay);
+    const after = simulateFlight(modelLaunch, course);
+    expect(values.total!).toBeCloseTo(values.carry! + 25 + (after.rollM - before.rollM), 10);
     expect(normalised).toContain('total');
+  });
+  it('normaliseShot to firmer ground at the same air lengthens total, not carry', () => {
+    const { values, normalised } = normaliseShot({ ...launch, carry: 230, total: 255 }, { ...bay, firmness: 'soft' }, { ...bay, firmness: 'firm' });
+    expect(values.carry).toBeCloseTo(230, 10);
+    expect(values.total!).toBeGreaterThan(255 + 10);
+    expect(normalised).toContain('total');
+  });
+  it('normaliseShot of a total without carry shifts it by the model’s change of total', () => {
+    const { values } = normaliseShot({ ...launch, total: 260 }, bay, course);
+    expect(values.total).toBeCloseTo(260 + simulateFlight(modelLaunch, course).totalM - simulateFlight(modelLaunch, bay).totalM, 10);
   });
   it('normaliseShot fills missing flight fields from the model in the target conditions', () => {
     const { values, derived } = normaliseShot({ ...launch, carry: 230 }, bay, course);
-    expect(derived).toEqual(['offline', 'apexHeight', 'descentAngle', 'flightTime']);
+    expect(derived).toEqual(['total', 'offline', 'apexHeight', 'descentAngle', 'flightTime']);
+    expect(values.total).toBeCloseTo(values.carry! + simulateFlight(modelLaunch, course).rollM, 10);
     expect(values.apexHeight).toBe(simulateFlight(modelLaunch, course).apexHeightM);
   });
   it('normaliseShot to the same conditions changes nothing', () => {
-    const measured = { ...launch, carry: 230, offline: 4, apexHeight: 27, descentAngle: 38, flightTime: 6.4 };
+    const measured = { ...launch, carry: 230, total: 250, offline: 4, apexHeight: 27, descentAngle: 38, flightTime: 6.4 };
     const { values } = normaliseShot(measured, bay, bay);
-    for (const field of ['carry', 'offline', 'apexHeight', 'descentAngle', 'flightTime'] as const) {
+    for (const field of ['carry', 'total', 'offline', 'apexHeight', 'descentAngle', 'flightTime'] as const) {
       expect(values[field]).toBeCloseTo(measured[field], 12);
     }
   });

@@ -1,18 +1,19 @@
-import { optimiseLaunch, simulateFlight } from '@/analysis/flight';
+import { launchWindowForClub, optimiseLaunch, simulateFlight, smitsSmithDragLyuLiftCoefficients, clubWindowAim } from '@/analysis/flight';
+
+const MPH = 0.44704; // NIST SP 811 (2008), Appendix B
 
 describe('optimiseLaunch', () => {
   const result = optimiseLaunch(70);
   it('optimiseLaunch at 70 m/s finds a best launch no grid point beats, inside the range', () => {
-    const gridBest = Math.max(...result.grid.carryM.flat());
-    expect(result.best.carryM).toBeGreaterThanOrEqual(gridBest);
+    for (const row of result.grid.valueM) for (const v of row) expect(result.best.carryM).toBeGreaterThanOrEqual(v);
     expect(result.bestOnEdge).toBe(false);
-    expect(
-      simulateFlight({ ballSpeedMps: 70, launchAngleDeg: result.best.launchAngleDeg, spinRateRpm: result.best.spinRateRpm }).carryM,
-    ).toBeCloseTo(result.best.carryM, 10);
+    expect(result.feasible).toBe(true);
+    const again = simulateFlight({ ballSpeedMps: 70, launchAngleDeg: result.best.launchAngleDeg, spinRateRpm: result.best.spinRateRpm });
+    expect(again.carryM).toBeCloseTo(result.best.carryM, 10);
   });
-  it('optimiseLaunch window holds the best launch and only launches within 1 % of its carry', () => {
+  it('optimiseLaunch window holds the best launch and exactly the grid launches within 1 % of it', () => {
     const { window, grid, best } = result;
-    expect(window.thresholdCarryM).toBeCloseTo(best.carryM * 0.99, 10);
+    expect(window.thresholdM).toBeCloseTo(best.carryM * 0.99, 10);
     expect(best.launchAngleDeg).toBeGreaterThanOrEqual(window.launchRangeDeg[0]);
     expect(best.launchAngleDeg).toBeLessThanOrEqual(window.launchRangeDeg[1]);
     expect(best.spinRateRpm).toBeGreaterThanOrEqual(window.spinRangeRpm[0]);
@@ -21,32 +22,85 @@ describe('optimiseLaunch', () => {
       const row = window.rows.find((r) => r.launchAngleDeg === launch);
       grid.spinRatesRpm.forEach((spin, j) => {
         const inside = row !== undefined && spin >= row.spinMinRpm && spin <= row.spinMaxRpm;
-        expect(grid.carryM[i][j] >= window.thresholdCarryM).toBe(inside);
+        expect(grid.valueM[i][j] >= window.thresholdM).toBe(inside);
       });
     });
   });
-  it('optimiseLaunch window outline goes up the low-spin edge and back down the high-spin edge', () => {
-    const { rows, polygon } = result.window;
-    expect(polygon).toHaveLength(rows.length * 2);
-    expect(polygon[0]).toEqual({ launchAngleDeg: rows[0].launchAngleDeg, spinRateRpm: rows[0].spinMinRpm });
-    expect(polygon[polygon.length - 1]).toEqual({ launchAngleDeg: rows[0].launchAngleDeg, spinRateRpm: rows[0].spinMaxRpm });
+  it('optimiseLaunch window is closed by tips beyond its first and last rows, not cut flat at the grid', () => {
+    const { rows, polygon, clipped } = result.window;
+    expect(clipped).toBe(false);
+    expect(polygon).toHaveLength(rows.length * 2 + 2);
+    expect(polygon[0].launchAngleDeg).toBeLessThan(rows[0].launchAngleDeg);
+    expect(polygon[0].launchAngleDeg).toBeGreaterThan(rows[0].launchAngleDeg - 0.5);
+    expect(polygon[rows.length + 1].launchAngleDeg).toBeGreaterThan(rows[rows.length - 1].launchAngleDeg);
+    expect(result.grid.launchAnglesDeg[0]).toBeLessThan(rows[0].launchAngleDeg); // the fine grid holds the window with room
   });
-  // Property from CHECKS.md / the issue: the carry-best launch angle falls as spin rises.
+  // Property of any lifting ball (e.g. Penner, "The physics of golf: the optimum loft of a
+  // driver", Am. J. Phys. 69:563, 2001): the carry-best launch angle falls as spin rises.
   it('optimiseLaunch with a fixed spin gives a best launch angle that falls as spin rises', () => {
     const angles = [2000, 3000, 4500, 6000, 8000].map(
       (spin) => optimiseLaunch(70, {}, { spinRangeRpm: [spin, spin], launchRangeDeg: [2, 40] }).best.launchAngleDeg,
     );
     for (let i = 1; i < angles.length; i++) expect(angles[i]).toBeLessThan(angles[i - 1]);
   });
+  // The issue's reference point: under the published trajectory model (A. M. Nathan, "Trajectory
+  // Calculator: Golf Version"), a 7-iron ball speed (120 mph) carries farthest near 20° launch;
+  // the earlier default advised a much higher launch (27° over its old search ranges).
+  it('optimiseLaunch at a 7-iron ball speed carries farthest near 20°, several degrees below the earlier default', () => {
+    const modern = optimiseLaunch(120 * MPH);
+    expect(modern.best.launchAngleDeg).toBeGreaterThan(17);
+    expect(modern.best.launchAngleDeg).toBeLessThan(23);
+    const earlier = optimiseLaunch(120 * MPH, {}, { model: smitsSmithDragLyuLiftCoefficients, launchStepDeg: 1, spinStepRpm: 250 });
+    expect(earlier.best.launchAngleDeg).toBeGreaterThan(modern.best.launchAngleDeg + 3);
+  });
+  it('optimiseLaunch with a descent floor keeps the best and the whole window at or above it', () => {
+    const steep = optimiseLaunch(120 * MPH, {}, { minDescentDeg: 48 });
+    expect(steep.best.descentAngleDeg).toBeGreaterThanOrEqual(48);
+    steep.grid.launchAnglesDeg.forEach((launch, i) => {
+      const row = steep.window.rows.find((r) => r.launchAngleDeg === launch);
+      steep.grid.spinRatesRpm.forEach((spin, j) => {
+        if (row && spin > row.spinMinRpm + 1 && spin < row.spinMaxRpm - 1) expect(steep.grid.descentDeg[i][j]).toBeGreaterThanOrEqual(48);
+      });
+    });
+  });
+  it('optimiseLaunch with a floor no launch reaches reports no feasible window', () => {
+    const none = optimiseLaunch(60, {}, { minDescentDeg: 85, launchRangeDeg: [4, 12], spinRangeRpm: [1000, 2000] });
+    expect(none.feasible).toBe(false);
+    expect(none.window.rows).toEqual([]);
+  });
+  it('optimiseLaunch for total on firm ground beats soft ground', () => {
+    const opts = { objective: 'total' as const, minDescentDeg: 35, launchStepDeg: 1, spinStepRpm: 250 };
+    expect(optimiseLaunch(70, { firmness: 'firm' }, opts).best.totalM).toBeGreaterThan(optimiseLaunch(70, { firmness: 'soft' }, opts).best.totalM);
+  });
   it('optimiseLaunch with a narrow range reports a best launch on its edge', () => {
     expect(optimiseLaunch(70, {}, { launchRangeDeg: [4, 8], spinRangeRpm: [2000, 4000] }).bestOnEdge).toBe(true);
   });
-  it('optimiseLaunch in thinner air carries the best launch farther', () => {
-    expect(optimiseLaunch(70, { altitudeM: 1600 }, { launchStepDeg: 2, spinStepRpm: 500 }).best.carryM).toBeGreaterThan(result.best.carryM);
-  });
-  it('optimiseLaunch with a ball speed that is not positive or a reversed range throws', () => {
+  it('optimiseLaunch with a ball speed that is not positive, a reversed range or a bad floor throws', () => {
     expect(() => optimiseLaunch(0)).toThrow(RangeError);
     expect(() => optimiseLaunch(70, {}, { launchRangeDeg: [20, 10] })).toThrow(RangeError);
     expect(() => optimiseLaunch(70, {}, { spinStepRpm: 0 })).toThrow(RangeError);
+    expect(() => optimiseLaunch(70, {}, { minDescentDeg: 95 })).toThrow(RangeError);
+  });
+});
+
+// Common practice, no source: woods for total, irons and hybrids for carry with a descent floor
+// (about 45° for mid irons is often quoted), wedges without a window.
+describe('launchWindowForClub', () => {
+  it('clubWindowAim per kind: total for driver and woods, carry over a floor for irons and hybrids, none for wedges', () => {
+    expect(clubWindowAim('driver')).toEqual({ objective: 'total', minDescentDeg: 35 });
+    expect(clubWindowAim('wood')?.objective).toBe('total');
+    expect(clubWindowAim('iron')).toEqual({ objective: 'carry', minDescentDeg: 45 });
+    expect(clubWindowAim('hybrid')).toEqual({ objective: 'carry', minDescentDeg: 40 });
+    expect(clubWindowAim('iron', 42)?.minDescentDeg).toBe(42);
+    expect(clubWindowAim('wedge')).toBeNull();
+    expect(clubWindowAim('putter')).toBeNull();
+  });
+  it('launchWindowForClub of a wedge gives no window', () => {
+    expect(launchWindowForClub('wedge', 40)).toBeNull();
+  });
+  it('launchWindowForClub of a 7 iron lands the best at least 45° steep', () => {
+    const iron = launchWindowForClub('iron', 120 * MPH, {}, { launchStepDeg: 1, spinStepRpm: 250 })!;
+    expect(iron.objective).toBe('carry');
+    expect(iron.best.descentAngleDeg).toBeGreaterThanOrEqual(45);
   });
 });

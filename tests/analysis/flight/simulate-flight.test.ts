@@ -18,15 +18,17 @@ describe('simulateFlight plausibility', () => {
   it('simulateFlight of a tour-average 7 iron carries within 8 % of about 172 yd', () => {
     expect(Math.abs(simulateFlight(sevenIron).carryM / YARD / 172 - 1)).toBeLessThan(0.08);
   });
-  // CHECKS.md: a drag fit in Reynolds number alone carries a fast driver far too long; the
+  // A drag fit in Reynolds number alone (Lyu et al., Proceedings 2(6):238, 2018, a ball with little
+  // spin) carries a fast driver far too long; the
   // default model, whose drag rises with spin ratio, must carry it shorter.
   it('simulateFlight with drag that ignores spin carries the driver farther than the default', () => {
     expect(simulateFlight(driver, {}, { model: lyuCoefficients }).carryM).toBeGreaterThan(simulateFlight(driver).carryM + 10 * YARD);
   });
   // Plausibility bound only: the governing bodies' overall distance standard, carry + roll
-  // ≤ 317 yd + 3 yd (CHECKS.md), so carry alone must stay under 320 yd. Launch from memory: the
+  // ≤ 317 yd + 3 yd (R&A / USGA Overall Distance Standard; memory), so carry alone must stay under 320 yd. Launch from memory: the
   // standard's test club speed 120 mph, 10°, 2520 rpm; ball speed from the smash-factor bound
-  // 1.48823 (Penner, Rep. Prog. Phys. 66, 2003, e = 0.83; computed in CHECKS.md).
+  // 1.48823 (Penner, "The physics of golf", Rep. Prog. Phys. 66:131, 2003: (1 + e)/(1 + m/M)
+  // with e = 0.83, m 45.93 g, M 200 g; computed).
   it('simulateFlight of a strong-player driver stays under the distance standard bound', () => {
     const strong = { ballSpeedMps: 120 * 1.48823 * MPH, launchAngleDeg: 10, spinRateRpm: 2520 };
     expect(simulateFlight(strong).carryM / YARD).toBeLessThan(320);

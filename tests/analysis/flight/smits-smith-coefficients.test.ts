@@ -1,6 +1,6 @@
 import { smitsSmithCoefficients, smitsSmithDragCoefficient, smitsSmithLiftCoefficient } from '@/analysis/flight';
 
-// Smits & Smith, Science and Golf II (1994), as quoted in CHECKS.md (memory/secondary):
+// Smits & Smith, Science and Golf II (1994), as quoted by A. M. Nathan (2008) and others (memory/secondary):
 // CD ≈ 0.24 + 0.18·S, CL ≈ 0.54·S^0.4. Values are the formulas' exact arithmetic.
 describe('smitsSmithCoefficients', () => {
   it.each([

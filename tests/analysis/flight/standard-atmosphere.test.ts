@@ -1,7 +1,7 @@
 import { isaDensityKgM3, isaPressurePa, isaTemperatureK } from '@/analysis/flight';
 
 // ISO 2533:1975 / ICAO standard atmosphere: sea-level values are the standard's definitions;
-// the altitude values are computed from its troposphere formula (CHECKS.md, "Air").
+// the altitude values are computed from its troposphere formula.
 describe('standard atmosphere', () => {
   it('isaDensityKgM3 at sea level gives the defined 1.225 kg/m³, 288.15 K, 101 325 Pa', () => {
     expect(isaTemperatureK(0)).toBe(288.15);

@@ -6,7 +6,7 @@ const base = { ...fittingFormText(undefined, { playerId: PLAYER_ID, today: '2025
 
 describe('parseFittingForm', () => {
   it('parseFittingForm, new indoor fitting with conditions, sends numbers and no fitterId', () => {
-    const result = parseFittingForm({ ...base, temperatureC: '21,5', altitudeM: '120', humidityPct: '40' });
+    const result = parseFittingForm({ ...base, temperatureC: '21,5', altitudeM: '120', humidityPct: '40', groundFirmness: 'firm' });
     expect(result).toEqual({
       ok: true,
       body: {
@@ -16,11 +16,17 @@ describe('parseFittingForm', () => {
         temperatureC: 21.5,
         altitudeM: 120,
         humidityPct: 40,
+        groundFirmness: 'firm',
         ball: null,
         notes: null,
         remote: false,
       },
     });
+  });
+
+  it('parseFittingForm, ground not stated, sends null', () => {
+    const result = parseFittingForm(base);
+    expect(result.ok && result.body.groundFirmness).toBeNull();
   });
 
   it('parseFittingForm, 29 February of a leap year, accepts it', () => {

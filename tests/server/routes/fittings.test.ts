@@ -15,7 +15,7 @@ afterAll(async () => {
   await ctx.close();
 });
 
-const body = () => ({ playerId: world.player.id, date: '2026-11-28', venue: 'outdoor', temperatureC: 14, altitudeM: 350, humidityPct: 70, ball: 'urethane', notes: 'range day' });
+const body = () => ({ playerId: world.player.id, date: '2026-11-28', venue: 'outdoor', temperatureC: 14, altitudeM: 350, humidityPct: 70, groundFirmness: 'firm', ball: 'urethane', notes: 'range day' });
 
 describe('/api/fittings', () => {
   it('GET without a session answers 401', async () => {
@@ -79,6 +79,7 @@ describe('/api/fittings', () => {
     [{ venue: 'garage' }, 'venue'],
     [{ humidityPct: 140 }, 'humidityPct'],
     [{ temperatureC: 90 }, 'temperatureC'],
+    [{ groundFirmness: 'muddy' }, 'groundFirmness'],
   ])('POST with %j answers 400 naming the field', async (patch, field) => {
     const agent = await signedInAgent(ctx.app, world.fitter.email);
     const res = await agent.post('/api/fittings').set(APP_HEADER).send({ ...body(), ...patch });
@@ -92,6 +93,15 @@ describe('/api/fittings', () => {
     const res = await agent.patch(`/api/fittings/${world.otherFitting.id}`).set(APP_HEADER).send({ notes: 'moved bays' });
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ ...before, notes: 'moved bays', updatedAt: expect.any(String) });
+  });
+
+  it('PATCH of the ground firmness stores it, and null clears it', async () => {
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const soft = await agent.patch(`/api/fittings/${world.otherFitting.id}`).set(APP_HEADER).send({ groundFirmness: 'soft' });
+    expect(soft.status).toBe(200);
+    expect((await agent.get(`/api/fittings/${world.otherFitting.id}`)).body.groundFirmness).toBe('soft');
+    const cleared = await agent.patch(`/api/fittings/${world.otherFitting.id}`).set(APP_HEADER).send({ groundFirmness: null });
+    expect(cleared.body.groundFirmness).toBeNull();
   });
 
   it('PATCH as a player or another shop answers 403 / 404', async () => {
