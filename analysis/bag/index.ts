@@ -1,0 +1,11 @@
+export { bagAsOf } from './bag-as-of';
+export type { BagHistoryEntry } from './bag-as-of';
+export { clubSpeedForLength, clubSpeedFromBallSpeed, estimateCarry } from './estimate-carry';
+export type { CarryEstimate, SpeedReference } from './estimate-carry';
+export { impactLaunch, TYPICAL_HEADS } from './launch-from-loft';
+export type { ImpactHead, ImpactLaunch } from './launch-from-loft';
+export { ProposalError, proposeBagChanges } from './propose-bag-changes';
+export type { BagChange, ProposalBagClub, ProposalChoice } from './propose-bag-changes';
+export { typicalLengthIn } from './typical-length';
+export { DEFAULT_WEDGE_WEAR_LIMITS, wedgeWearReminder } from './wedge-wear';
+export type { WedgeWearLimits, WedgeWearReminder } from './wedge-wear';
