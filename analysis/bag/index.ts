@@ -9,3 +9,7 @@ export type { BagChange, ProposalBagClub, ProposalChoice } from './propose-bag-c
 export { typicalLengthIn } from './typical-length';
 export { DEFAULT_WEDGE_WEAR_LIMITS, wedgeWearReminder } from './wedge-wear';
 export type { WedgeWearLimits, WedgeWearReminder } from './wedge-wear';
+export { specNumber, specRows } from './spec-rows';
+export type { PrintableSpec } from './spec-rows';
+export { CARRY_SOURCE_WORDS, distanceText, figureLines, ladderTextRows } from './spec-sheet-text';
+export type { ChoiceFigures, LadderTextRow } from './spec-sheet-text';
