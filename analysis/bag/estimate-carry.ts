@@ -66,3 +66,35 @@ export function estimateCarry(
   const flight = simulateFlight(launch, air);
   return { carryM: flight.carryM, clubSpeedMps, launch, loftDeg, loftFrom: club.loftDeg === null ? 'typical' : 'club' };
 }
+
+/** A club the player hit: its code, loft, length and median carry. */
+export interface HitClub {
+  club: string;
+  loftDeg: number | null;
+  lengthIn: number | null;
+  carryM: number;
+}
+
+/**
+ * The speed reference that makes the estimate reproduce a club the player hit: the club speed
+ * (at that club's length) whose estimated carry equals the measured one, by bisection on
+ * 5–90 m/s (carry rises with speed). Estimates for the player's other clubs then start from
+ * their own ball striking rather than a typical one. Null for a putter, an unknown code, or a
+ * carry outside what 5–90 m/s gives. O(40 flights).
+ * @example calibratedReference({ club: '7I', loftDeg: 31, lengthIn: 37, carryM: 130.8 })?.clubSpeedMps // => ≈ 34
+ */
+export function calibratedReference(hit: HitClub, air: AirConditions = {}): SpeedReference | null {
+  const info = clubInfo(hit.club);
+  const lengthIn = hit.lengthIn ?? typicalLengthIn(hit.club);
+  if (!info || info.kind === 'putter' || lengthIn === null || !(hit.carryM > 0)) return null;
+  const carryAt = (speed: number) => estimateCarry({ club: hit.club, loftDeg: hit.loftDeg, lengthIn }, { clubSpeedMps: speed, lengthIn }, air)!.carryM;
+  let lo = 5;
+  let hi = 90;
+  if (carryAt(lo) > hit.carryM || carryAt(hi) < hit.carryM) return null;
+  for (let i = 0; i < 40; i++) {
+    const mid = (lo + hi) / 2;
+    if (carryAt(mid) < hit.carryM) lo = mid;
+    else hi = mid;
+  }
+  return { clubSpeedMps: (lo + hi) / 2, lengthIn };
+}

@@ -1,7 +1,7 @@
 export { bagAsOf } from './bag-as-of';
 export type { BagHistoryEntry } from './bag-as-of';
-export { clubSpeedForLength, clubSpeedFromBallSpeed, estimateCarry } from './estimate-carry';
-export type { CarryEstimate, SpeedReference } from './estimate-carry';
+export { calibratedReference, clubSpeedForLength, clubSpeedFromBallSpeed, estimateCarry } from './estimate-carry';
+export type { CarryEstimate, HitClub, SpeedReference } from './estimate-carry';
 export { impactLaunch, TYPICAL_HEADS } from './launch-from-loft';
 export type { ImpactHead, ImpactLaunch } from './launch-from-loft';
 export { ProposalError, proposeBagChanges } from './propose-bag-changes';

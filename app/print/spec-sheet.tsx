@@ -1,5 +1,5 @@
 import { useLocalSearchParams } from 'expo-router';
-import { Platform, StyleSheet, View } from 'react-native';
+import { Platform, ScrollView, StyleSheet, View } from 'react-native';
 import { NoPrint } from '@/components/bag/no-print';
 import { PrintStyle } from '@/components/bag/print-style';
 import { SpecSheetDocument } from '@/components/bag/spec-sheet-document';
@@ -8,7 +8,6 @@ import { useSession } from '@/components/session/session-provider';
 import { Button } from '@/components/ui/button';
 import { ErrorState } from '@/components/ui/error-state';
 import { LoadingState } from '@/components/ui/loading-state';
-import { Screen } from '@/components/ui/screen';
 import { useGoBack } from '@/components/navigation';
 
 /** /print/spec-sheet?id=… or ?fittingId=… — the sheet alone, 700 px wide, with the print stylesheet. */
@@ -21,7 +20,7 @@ export default function PrintSpecSheetScreen() {
   const query = id ? sent : draft;
   const units = session.me?.units ?? 'imperial';
   return (
-    <Screen>
+    <ScrollView style={styles.page} contentContainerStyle={styles.content}>
       <PrintStyle />
       <View style={styles.paper}>
         <NoPrint style={styles.actions}>
@@ -32,11 +31,14 @@ export default function PrintSpecSheetScreen() {
         {query.isError ? <ErrorState error={query.error} onRetry={() => void query.refetch()} /> : null}
         {query.data ? <SpecSheetDocument sheet={query.data} units={units} /> : null}
       </View>
-    </Screen>
+    </ScrollView>
   );
 }
 
 const styles = StyleSheet.create({
+  // White like the paper it prints on; no app header or tabs on this page.
+  page: { flex: 1, backgroundColor: '#FFFFFF' },
+  content: { padding: 16 },
   paper: { width: '100%', maxWidth: 700, alignSelf: 'center', gap: 16 },
   actions: { flexDirection: 'row', gap: 12 },
 });

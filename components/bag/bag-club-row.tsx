@@ -1,5 +1,6 @@
 import { useRouter } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
+import { clubInfo } from '@/analysis/clubs';
 import type { UnitSystem } from '@/analysis/units';
 import type { BagClub } from '@/server/schemas';
 import { buildSummary } from '../builds/build-summary';
@@ -29,7 +30,9 @@ export function BagClubRow({ club, units, playerId, readOnly = false }: BagClubR
           ) : null}
         </View>
         <AppText tone="muted" style={!summary && styles.none}>{summary ?? 'No specs yet'}</AppText>
-        <AppText variant="caption">{`Carry ${carryText(club.carry, units)}${club.inBagSince ? ` · in since ${formatDate(club.inBagSince)}` : ''}`}</AppText>
+        <AppText variant="caption">
+          {[clubInfo(club.club)?.kind === 'putter' ? null : `Carry ${carryText(club.carry, units)}`, club.inBagSince ? `in since ${formatDate(club.inBagSince)}` : null].filter(Boolean).join(' · ')}
+        </AppText>
         {club.wear ? (
           <AppText variant="caption" style={styles.wear}>
             {`Time to check the grooves: ${club.wear.roundsSince} rounds and ${club.wear.practiceSessionsSince} practice sessions since it went in.`}

@@ -20,14 +20,15 @@ const color = BUILD_COLORS[0];
  */
 export function BagLadderChart({ ladder, units, widthPx }: BagLadderChartProps) {
   const { rungs, sources, labels } = chartRungs(ladder);
-  const g = ladderChartGeometry({ rungs, units, widthPx });
+  // The layout leaves 24 px more on the right than the session ladder, for the longest flag words ("−2 yd · reversed").
+  const g = ladderChartGeometry({ rungs, units, widthPx: Math.max(120, widthPx - 24) });
   const { plot } = g;
   const flagged = g.gaps.filter((gap) => gap.flag !== null).length;
   const estimates = sources.filter((s) => s === 'estimate').length;
   const summary = `Bag ladder: ${countWords(g.rows.length, 'club')}, ${countWords(flagged, 'flagged gap')}, ${countWords(estimates, 'estimated carry', 'estimated carries')}`;
   return (
     <View accessible accessibilityRole="image" accessibilityLabel={summary}>
-      <Svg width={g.widthPx} height={g.heightPx + 18}>
+      <Svg width={widthPx} height={g.heightPx + 18}>
         {g.carryLines.map((l) => (
           <G key={`c${l.value}`}>
             <Line x1={l.px} x2={l.px} y1={plot.top} y2={plot.bottom} stroke={chartColors.grid} strokeWidth={l.label ? 1 : 0.5} />

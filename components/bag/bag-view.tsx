@@ -64,7 +64,7 @@ export function BagView({ playerId }: BagViewProps) {
         <BagLadderTable ladder={bag.ladder} units={me.units} />
         {estimates ? (
           <AppText variant="caption" tone="muted">
-            {`An estimate is the ball-flight model’s carry for the club’s loft and ${bag.speed ? `a club speed scaled from the ${specNumber(Math.round(bag.speed.clubSpeedMps * 10) / 10)} m/s measured with the ${bag.speed.club === 'DR' ? 'driver' : 'longest club hit'}` : 'the player’s speed'}; a fitting that hits the club replaces it.`}
+            An estimate is the ball-flight model’s carry for the club’s loft at the player’s speed, worked out from the club hit nearest in loft (or the club speed measured in the latest fitting). A fitting that hits the club replaces it.
           </AppText>
         ) : null}
       </Section>

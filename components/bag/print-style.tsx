@@ -3,7 +3,7 @@ import { Platform } from 'react-native';
 
 /**
  * The print stylesheet of the print view (web only): the page flows onto as many sheets as it
- * needs (no app scroll box), buttons are left out, colours print as on screen. `@page` sets the
+ * needs (no app scroll box), buttons are left out; backgrounds print only when the reader asks for them. `@page` sets the
  * margins only, so the same page prints on A4 and on US Letter (the document is 700 px wide,
  * inside both: A4 less 2 × 12 mm is 703 px, Letter 725 px at 96 px to the inch).
  */
@@ -14,7 +14,6 @@ export const PRINT_CSS = `
   #root div { overflow: visible !important; }
   [data-print="hide"] { display: none !important; }
   [data-print="keep"] { break-inside: avoid; page-break-inside: avoid; }
-  * { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
 }`;
 
 /** Adds the print stylesheet while mounted. */

@@ -64,6 +64,8 @@ export interface BagCarry {
   /** Estimate: the club speed assumed (m/s) and whether the loft was the club's own or typical. */
   clubSpeedMps?: number;
   loftFrom?: 'club' | 'typical';
+  /** Estimate: the hit club whose carry set the player's speed, if any. */
+  fromClub?: string;
 }
 
 /** One club of a player's bag. */

@@ -1,11 +1,12 @@
 /**
  * Where a bag club's carry comes from: the latest fitting where it was hit (its source build's
  * group, or the player's own club — shots with no build name — in a later fitting), else the
- * carry entered, else the flight model's estimate for its loft and the player's speed.
+ * carry entered, else the flight model's estimate for its loft and the player's speed (worked out
+ * from the hit club nearest in loft, else the club speed measured in the latest fitting).
  */
 import { Op, type Sequelize } from 'sequelize';
-import { compareClubs } from '../../analysis/clubs';
-import { clubSpeedFromBallSpeed, estimateCarry, typicalLengthIn, type SpeedReference } from '../../analysis/bag';
+import { clubInfo, compareClubs } from '../../analysis/clubs';
+import { calibratedReference, clubSpeedFromBallSpeed, estimateCarry, typicalLengthIn, type SpeedReference } from '../../analysis/bag';
 import type { GroupAnalysis } from '../../analysis/session';
 import { Build, Fitting } from '../models';
 import type { BagCarry, BagView } from '../schemas';
@@ -87,8 +88,9 @@ export async function bagCarries(sequelize: Sequelize, actor: Actor, playerId: s
   if (sourceBuildIds.length) for (const b of await Build.findAll({ where: { id: { [Op.in]: sourceBuildIds } }, attributes: ['id', 'label'] })) sourceLabels.set(b.id, b.label);
 
   const speed = speedReference(figures);
-  const reference: SpeedReference | null = speed ? { clubSpeedMps: speed.clubSpeedMps, lengthIn: speed.lengthIn } : null;
+  const measured: SpeedReference | null = speed ? { clubSpeedMps: speed.clubSpeedMps, lengthIn: speed.lengthIn } : null;
   const carries = new Map<string, BagCarry | null>();
+  const pending: CarryInput[] = [];
   for (const c of clubs) {
     let carry: BagCarry | null = null;
     // The latest fitting where the club was hit: its source build, or the player's own club (no build name).
@@ -99,11 +101,23 @@ export async function bagCarries(sequelize: Sequelize, actor: Actor, playerId: s
       if (carry) break;
     }
     if (!carry && c.carryEnteredM !== null) carry = { carryM: c.carryEnteredM, source: 'entered' };
-    if (!carry) {
-      const e = estimateCarry({ club: c.club, loftDeg: c.loftDeg, lengthIn: c.lengthIn }, reference);
-      if (e) carry = { carryM: e.carryM, source: 'estimate', clubSpeedMps: e.clubSpeedMps, loftFrom: e.loftFrom };
-    }
     carries.set(c.id, carry);
+    if (!carry) pending.push(c);
+  }
+  // Estimates start from the hit club nearest in loft (its speed worked out so the model carries it
+  // as far as it was hit), else from the club speed measured in the latest fitting.
+  const hits = clubs.filter((c) => carries.get(c.id)?.source === 'hit');
+  const references = new Map<string, SpeedReference | null>();
+  const loftOf = (c: CarryInput) => c.loftDeg ?? clubInfo(c.club)?.typicalLoftDeg ?? 90;
+  for (const c of pending) {
+    const nearest = [...hits].sort((a, b) => Math.abs(loftOf(a) - loftOf(c)) - Math.abs(loftOf(b) - loftOf(c)))[0];
+    let reference = measured;
+    if (nearest) {
+      if (!references.has(nearest.id)) references.set(nearest.id, calibratedReference({ club: nearest.club, loftDeg: nearest.loftDeg, lengthIn: nearest.lengthIn, carryM: carries.get(nearest.id)!.carryM }));
+      reference = references.get(nearest.id) ?? measured;
+    }
+    const e = estimateCarry({ club: c.club, loftDeg: c.loftDeg, lengthIn: c.lengthIn }, reference);
+    if (e) carries.set(c.id, { carryM: e.carryM, source: 'estimate', clubSpeedMps: e.clubSpeedMps, loftFrom: e.loftFrom, ...(nearest && references.get(nearest.id) ? { fromClub: nearest.club } : {}) });
   }
   return { carries, speed };
 }

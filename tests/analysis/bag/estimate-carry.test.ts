@@ -1,4 +1,4 @@
-import { clubSpeedForLength, clubSpeedFromBallSpeed, estimateCarry, impactLaunch, TYPICAL_HEADS, typicalLengthIn } from '@/analysis/bag';
+import { calibratedReference, clubSpeedForLength, clubSpeedFromBallSpeed, estimateCarry, impactLaunch, TYPICAL_HEADS, typicalLengthIn } from '@/analysis/bag';
 
 const YD = 0.9144; // NIST SP 811 (2008), Appendix B
 const reference = { clubSpeedMps: 45, lengthIn: 45.5 };
@@ -49,5 +49,26 @@ describe('estimateCarry', () => {
     expect(estimateCarry({ club: 'PT', loftDeg: 3, lengthIn: 34 }, reference)).toBeNull();
     expect(estimateCarry({ club: 'XX', loftDeg: 20, lengthIn: 40 }, reference)).toBeNull();
     expect(estimateCarry({ club: '7I', loftDeg: 31, lengthIn: 37 }, null)).toBeNull();
+  });
+});
+
+describe('calibratedReference', () => {
+  it('calibratedReference gives the speed at which the estimate carries the hit club as far as it was hit', () => {
+    const hit = { club: '7I', loftDeg: 31, lengthIn: 37, carryM: 128 };
+    const reference = calibratedReference(hit)!;
+    expect(reference.lengthIn).toBe(37);
+    expect(estimateCarry(hit, reference)!.carryM).toBeCloseTo(128, 6);
+  });
+
+  it('calibratedReference of a faster player’s carry is a faster speed', () => {
+    const slow = calibratedReference({ club: '7I', loftDeg: 31, lengthIn: 37, carryM: 110 })!;
+    const fast = calibratedReference({ club: '7I', loftDeg: 31, lengthIn: 37, carryM: 150 })!;
+    expect(fast.clubSpeedMps).toBeGreaterThan(slow.clubSpeedMps);
+  });
+
+  it('calibratedReference of a putter, an unknown club or a carry out of reach is null', () => {
+    expect(calibratedReference({ club: 'PT', loftDeg: 3, lengthIn: 34, carryM: 5 })).toBeNull();
+    expect(calibratedReference({ club: 'XX', loftDeg: 20, lengthIn: 40, carryM: 150 })).toBeNull();
+    expect(calibratedReference({ club: '7I', loftDeg: 31, lengthIn: 37, carryM: 900 })).toBeNull();
   });
 });
