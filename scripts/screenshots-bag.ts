@@ -110,6 +110,19 @@ async function main(): Promise<void> {
           fs.writeFileSync(path.join(OUT, 'server-letter.pdf'), await letter.body());
         }
         console.log('   print and server PDFs');
+        // Send it again: the message lands in npm start's local inbox (INBOX_URL, maildev's page).
+        const inbox = process.env.INBOX_URL;
+        if (inbox && sheetId) {
+          await page.goto(`${BASE}/spec-sheets/${sheetId}`);
+          await page.getByRole('button', { name: 'Send again' }).click();
+          await page.getByText(/with a copy to the shop/).waitFor();
+          await page.goto(inbox);
+          await page.waitForTimeout(1500);
+          await shot(page, 'wide-66-local-inbox');
+          const list = (await (await page.request.get(`${inbox}/api/email`)).json()) as { subject: string; attachments?: { fileName: string; contentType: string }[] }[];
+          const last = list[list.length - 1];
+          console.log(`   inbox: ${list.length} message(s); last "${last?.subject}" with ${last?.attachments?.map((a) => `${a.fileName} (${a.contentType})`).join(', ') ?? 'no attachment'}`);
+        }
       }
       await context.close();
 
