@@ -28,7 +28,14 @@ async function signIn(page: Page, email: string): Promise<void> {
 
 /** The height of the app's own scroll box's content (the page itself does not scroll). */
 const contentHeight = (page: Page) =>
-  page.evaluate(() => Math.max(...[...document.querySelectorAll('div')].filter((d) => /(auto|scroll)/.test(getComputedStyle(d).overflowY)).map((d) => d.scrollHeight + 80), window.innerHeight));
+  page.evaluate(() => {
+    let height = window.innerHeight;
+    for (const d of document.querySelectorAll('div')) {
+      const overflow = getComputedStyle(d).overflowY;
+      if (overflow === 'auto' || overflow === 'scroll') height = Math.max(height, d.scrollHeight + 80);
+    }
+    return height;
+  });
 
 /**
  * A screenshot; `tall` makes the window as high as the content first (the app scrolls inside
@@ -88,8 +95,8 @@ async function main(): Promise<void> {
       await shot(page, `${s}-63-bag-club-edit`, true);
       await page.goto(`${BASE}/fittings`);
       await page.getByRole('link').filter({ hasText: 'Nell Tarrant' }).first().click();
-      await page.getByRole('heading', { name: 'Chosen builds and the bag' }).waitFor();
-      await page.getByRole('heading', { name: 'Chosen builds and the bag' }).scrollIntoViewIfNeeded();
+      await page.getByRole('heading', { name: 'Chosen for the bag' }).waitFor();
+      await page.getByRole('heading', { name: 'Chosen for the bag' }).scrollIntoViewIfNeeded();
       await shot(page, `${s}-64-fitting-chosen`);
       await page.getByRole('button', { name: 'Spec sheet' }).click();
       await page.getByText('Why this build').first().waitFor();

@@ -39,7 +39,7 @@ export function ChooseBuildsSection({ fitting }: ChooseBuildsSectionProps) {
   const loading = chosen.isPending || builds.isPending || (staff && bag.isPending);
   const error = chosen.error ?? builds.error ?? (staff ? bag.error : null);
   return (
-    <Section title="Chosen builds and the bag">
+    <Section title="Chosen for the bag">
       {loading && !error ? <LoadingState label="Loading the chosen builds…" /> : null}
       {error ? <ErrorState error={error} onRetry={() => void Promise.all([chosen.refetch(), builds.refetch(), bag.refetch()])} /> : null}
       {chosen.data && builds.data ? (

@@ -60,7 +60,7 @@ describe('from a fitting to the bag and the spec sheet in the browser', () => {
     const page = await demo.browser.newPage({ viewport: DESKTOP });
     await signInAs(page, demo.url, 'oskar@larchmere.example');
     await page.goto(`${demo.url}/fittings/${fittingId}`);
-    await page.getByRole('heading', { name: 'Chosen builds and the bag' }).waitFor({ timeout: 30_000 });
+    await page.getByRole('heading', { name: 'Chosen for the bag' }).waitFor({ timeout: 30_000 });
 
     await page.getByLabel('Chosen build, driver').selectOption({ label: 'Loft up + heel 6 g' });
     await page.getByRole('button', { name: 'Propose the bag changes' }).click();

@@ -192,4 +192,11 @@ describe('GET /api/bag-clubs/:id/history', () => {
     expect((await as.owner.get(`/api/bag-clubs/${UNKNOWN}/history`)).status).toBe(404);
     expect((await as.owner.get(url)).status).toBe(200);
   });
+
+  it('history, PATCH and wear with a malformed id answer 400', async () => {
+    expect((await as.owner.get('/api/bag-clubs/nope/history')).status).toBe(400);
+    expect((await as.owner.patch('/api/bag-clubs/nope').set(APP_HEADER).send({ version: 1 })).status).toBe(400);
+    expect((await as.playerA.patch('/api/bag-clubs/nope/wear').set(APP_HEADER).send({ version: 1 })).status).toBe(400);
+    expect((await as.fitter.post('/api/players/nope/bag/clubs').set(APP_HEADER).send(driver)).status).toBe(400);
+  });
 });

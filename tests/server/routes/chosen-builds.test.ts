@@ -130,6 +130,12 @@ describe('/api/fittings/:id/chosen-builds', () => {
     expect(malformed.status).toBe(400);
   });
 
+  it('GET, PUT and confirm with a malformed fitting id answer 400', async () => {
+    expect((await as.fitter.get('/api/fittings/nope/chosen-builds')).status).toBe(400);
+    expect((await as.fitter.put('/api/fittings/nope/chosen-builds').set(APP_HEADER).send({ builds: [] })).status).toBe(400);
+    expect((await as.fitter.post('/api/fittings/nope/chosen-builds/confirm').set(APP_HEADER).send({ versions: {} })).status).toBe(400);
+  });
+
   it('POST confirm with nothing chosen answers 400', async () => {
     const { url } = await setUp();
     const res = await as.fitter.post(`${url}/confirm`).set(APP_HEADER).send({ versions: {} });

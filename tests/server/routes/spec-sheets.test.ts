@@ -94,6 +94,10 @@ describe('GET /api/fittings/:id/spec-sheet', () => {
     expect((await request(ctx.app).get(url)).status).toBe(401);
     for (const who of ['playerA', 'playerB', 'rivalFitter', 'rivalOwner'] as const) expect((await as[who].get(url)).status).toBe(404);
     expect((await as.fitter.get(url)).status).toBe(200);
+    expect((await as.fitter.get('/api/fittings/nope/spec-sheet')).status).toBe(400);
+    expect((await as.fitter.get('/api/fittings/00000000-0000-4000-8000-000000000000/spec-sheet')).status).toBe(404);
+    expect((await as.fitter.post('/api/fittings/nope/spec-sheet/send').set(APP_HEADER)).status).toBe(400);
+    expect((await as.playerA.post('/api/spec-sheets/nope/accept').set(APP_HEADER)).status).toBe(400);
   });
 });
 
