@@ -5,6 +5,7 @@ import { spawn } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
+import { startLocalInbox, type LocalInbox } from './lib/local-inbox';
 import { startPrivateMariadb } from './lib/private-mariadb';
 import { buildWebIfChanged } from './lib/web-build';
 
@@ -44,6 +45,16 @@ async function main() {
     await stopDb();
     throw err;
   }
+  // E-mail: SMTP_URL when set; otherwise a local inbox (maildev) that shows every message sent.
+  let inbox: LocalInbox | null = null;
+  if (!process.env.SMTP_URL) {
+    try {
+      inbox = await startLocalInbox(ROOT);
+      console.log(`Local inbox (every e-mail Ovalyard sends): ${inbox.webUrl}`);
+    } catch (err) {
+      console.log(`Local inbox not started (${err instanceof Error ? err.message : err}); e-mails go to the log.`);
+    }
+  }
   const server = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
     cwd: ROOT,
     stdio: 'inherit',
@@ -60,6 +71,7 @@ async function main() {
       COOKIE_SECURE: process.env.COOKIE_SECURE ?? '0',
       DEMO_SEED: process.env.DEMO_SEED ?? '1',
       WEB_DIST: path.join(ROOT, 'dist'),
+      ...(inbox ? { SMTP_URL: inbox.smtpUrl } : {}),
     },
   });
   const stop = (signal: NodeJS.Signals) => {
@@ -70,6 +82,7 @@ async function main() {
   process.on('SIGINT', () => stop('SIGINT'));
   process.on('SIGTERM', () => stop('SIGTERM'));
   server.on('exit', async (code) => {
+    inbox?.stop();
     await stopDb();
     process.exit(stopping ? 0 : (code ?? 1));
   });

@@ -7,13 +7,17 @@ import type { Config } from './config';
 import { authenticate } from './middleware/authenticate';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { authRouter } from './routes/auth';
+import { bagsRouter } from './routes/bags';
 import { bayFilesRouter } from './routes/bay-files';
+import { chosenBuildsRouter } from './routes/chosen-builds';
 import { fittingsRouter } from './routes/fittings';
 import { healthRouter } from './routes/health';
 import { playersRouter } from './routes/players';
 import { recipesRouter } from './routes/recipes';
 import { shotsRouter } from './routes/shots';
+import { specSheetsRouter } from './routes/spec-sheets';
 import { teamRouter } from './routes/team';
+import { workshopSettingsRouter } from './routes/workshop-settings';
 import type { CommitHooks } from './services/bay-files';
 import { createMailer, type Mailer } from './services/mailer';
 
@@ -42,15 +46,20 @@ export function createApp({ sequelize, config, mailer, serveWeb = false, log, co
     next();
   });
   api.use('/health', healthRouter(sequelize));
-  api.use(authRouter(config, mailer ?? createMailer(config.mail.smtpUrl, config.mail.from)));
+  const mail = mailer ?? createMailer(config.mail.smtpUrl, config.mail.from);
+  api.use(authRouter(config, mail));
   // Everything below needs a signed-in user; each service checks role and shop again.
-  api.use(['/players', '/fittings', '/team', '/recipes', '/bay-files', '/shots', '/builds'], authenticate(config));
+  api.use(['/players', '/fittings', '/team', '/recipes', '/bay-files', '/shots', '/builds', '/bag-clubs', '/spec-sheets', '/workshop-settings'], authenticate(config));
   api.use('/players', playersRouter());
   api.use('/fittings', fittingsRouter());
   api.use('/team', teamRouter());
   api.use('/recipes', recipesRouter());
   api.use(bayFilesRouter(sequelize, config, commitHooks));
   api.use(shotsRouter(sequelize));
+  api.use(bagsRouter(sequelize));
+  api.use(chosenBuildsRouter());
+  api.use(specSheetsRouter(sequelize, config, mail));
+  api.use('/workshop-settings', workshopSettingsRouter());
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -1,7 +1,7 @@
 import type { ColorValue } from 'react-native';
 import Svg, { Circle, Ellipse, Path, Rect } from 'react-native-svg';
 
-export type TabIconName = 'players' | 'fittings' | 'team' | 'account';
+export type TabIconName = 'players' | 'fittings' | 'team' | 'account' | 'bag';
 
 type TabIconProps = { name: TabIconName; color: ColorValue; size?: number };
 
@@ -29,6 +29,13 @@ export function TabIcon({ name, color, size = 24 }: TabIconProps) {
         <>
           <Rect x={4} y={5} width={16} height={14} rx={2.5} {...stroke} />
           <Path d="M8 10h8M8 14h5" {...stroke} />
+        </>
+      ) : null}
+      {name === 'bag' ? (
+        <>
+          <Rect x={7} y={7} width={10} height={14} rx={3} {...stroke} />
+          <Path d="M9 7V4.5M12 7V3M15 7V5" {...stroke} />
+          <Path d="M7 12h10" {...stroke} />
         </>
       ) : null}
       {name === 'account' ? (

@@ -3,6 +3,7 @@ import * as m0001 from './0001-foundation';
 import * as m0002 from './0002-bay-files';
 import * as m0003 from './0003-password-resets';
 import * as m0005 from './0005-ground-firmness';
+import * as m0007 from './0007-bags-spec-sheets';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -12,4 +13,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '0002-bay-files', ...m0002 },
   { name: '0003-password-resets', ...m0003 },
   { name: '0005-ground-firmness', ...m0005 },
+  { name: '0007-bags-spec-sheets', ...m0007 },
 ];

@@ -1,5 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import type { Fitting } from './fitting';
+import { specAttributes } from './spec-attributes';
 
 /** One head build under test in a fitting, found by (club, label) on its shots. */
 export class Build extends Model<InferAttributes<Build>, InferCreationAttributes<Build>> {
@@ -10,6 +11,9 @@ export class Build extends Model<InferAttributes<Build>, InferCreationAttributes
   declare head: CreationOptional<string | null>;
   declare loftDeg: CreationOptional<number | null>;
   declare hoselSetting: CreationOptional<string | null>;
+  declare hoselLoftChangeDeg: CreationOptional<number | null>;
+  declare hoselLieChangeDeg: CreationOptional<number | null>;
+  declare hoselFaceChangeDeg: CreationOptional<number | null>;
   declare lieDeg: CreationOptional<number | null>;
   declare lengthIn: CreationOptional<number | null>;
   declare shaft: CreationOptional<string | null>;
@@ -17,7 +21,10 @@ export class Build extends Model<InferAttributes<Build>, InferCreationAttributes
   declare shaftFlex: CreationOptional<string | null>;
   declare torqueDeg: CreationOptional<number | null>;
   declare grip: CreationOptional<string | null>;
+  declare gripSize: CreationOptional<string | null>;
   declare swingWeight: CreationOptional<string | null>;
+  declare totalWeightG: CreationOptional<number | null>;
+  declare balancePointIn: CreationOptional<number | null>;
   declare addedMassG: CreationOptional<number | null>;
   declare addedMassWhere: CreationOptional<string | null>;
   declare notes: CreationOptional<string | null>;
@@ -25,28 +32,12 @@ export class Build extends Model<InferAttributes<Build>, InferCreationAttributes
   declare updatedAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize) {
-    const text = (n: number) => ({ type: DataTypes.STRING(n), allowNull: true });
-    // A fresh object per attribute: Sequelize writes the attribute's name into it.
-    const num = () => ({ type: DataTypes.DOUBLE, allowNull: true });
     Build.init(
       {
         id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
         club: { type: DataTypes.STRING(40), allowNull: false },
         label: { type: DataTypes.STRING(80), allowNull: false },
-        head: text(120),
-        loftDeg: num(),
-        hoselSetting: text(60),
-        lieDeg: num(),
-        lengthIn: num(),
-        shaft: text(120),
-        shaftWeightG: num(),
-        shaftFlex: text(20),
-        torqueDeg: num(),
-        grip: text(120),
-        swingWeight: text(10),
-        addedMassG: num(),
-        addedMassWhere: text(60),
-        notes: { type: DataTypes.TEXT, allowNull: true },
+        ...specAttributes(),
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

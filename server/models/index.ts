@@ -1,14 +1,20 @@
 import type { Sequelize } from 'sequelize';
+import { BagClub } from './bag-club';
+import { BagClubHistory } from './bag-club-history';
 import { BayFile } from './bay-file';
 import { Build } from './build';
+import { ChosenBuild, ChosenBuildConfirmation, ChosenTakeOut } from './chosen-build';
 import { Fitting } from './fitting';
 import { PasswordReset } from './password-reset';
 import { Player } from './player';
 import { Recipe } from './recipe';
 import { Shop } from './shop';
+import { SpecSheetRecord } from './spec-sheet';
 import { User } from './user';
+import { WorkshopSettingsRecord } from './workshop-settings';
 
 export { BayFile, Build, Fitting, PasswordReset, Player, Recipe, Shop, User };
+export { BagClub, BagClubHistory, ChosenBuild, ChosenBuildConfirmation, ChosenTakeOut, SpecSheetRecord, WorkshopSettingsRecord };
 
 /** Registers every model and association on one Sequelize instance. */
 export function initModels(sequelize: Sequelize): void {
@@ -20,6 +26,7 @@ export function initModels(sequelize: Sequelize): void {
   Recipe.initModel(sequelize);
   Build.initModel(sequelize);
   PasswordReset.initModel(sequelize);
+  initBagModels(sequelize);
 
   Shop.hasMany(User, { foreignKey: 'shopId' });
   User.belongsTo(Shop, { foreignKey: 'shopId', as: 'shop' });
@@ -40,4 +47,19 @@ export function initModels(sequelize: Sequelize): void {
   Shop.hasMany(Recipe, { foreignKey: 'shopId' });
   Recipe.belongsTo(Shop, { foreignKey: 'shopId' });
   Recipe.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
+}
+
+/** The bag, chosen builds, spec sheets and workshop settings (migration 0007). */
+function initBagModels(sequelize: Sequelize): void {
+  BagClub.initModel(sequelize);
+  BagClubHistory.initModel(sequelize);
+  ChosenBuild.initModel(sequelize);
+  ChosenTakeOut.initModel(sequelize);
+  ChosenBuildConfirmation.initModel(sequelize);
+  SpecSheetRecord.initModel(sequelize);
+  WorkshopSettingsRecord.initModel(sequelize);
+  Player.hasMany(BagClub, { foreignKey: 'playerId', as: 'bagClubs' });
+  BagClub.belongsTo(Player, { foreignKey: 'playerId', as: 'player' });
+  BagClub.hasMany(BagClubHistory, { foreignKey: 'bagClubId', as: 'history' });
+  BagClubHistory.belongsTo(User, { foreignKey: 'changedBy', as: 'changer' });
 }

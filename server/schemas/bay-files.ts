@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { recipeSchema } from '../../analysis/import/recipe';
+import { buildSpecSchema } from './build-spec';
 
 /** How builds are given to the shots of a file. */
 export const buildAssignmentSchema = z.discriminatedUnion('mode', [
@@ -63,21 +64,7 @@ export const remapBodySchema = z.object({
 
 export const shotDecisionBodySchema = z.object({ decision: z.enum(['keep', 'drop']).nullable() });
 
-export const buildSpecBodySchema = z.object({
-  head: z.string().trim().max(120).nullish(),
-  loftDeg: z.number().min(0).max(90).nullish(),
-  hoselSetting: z.string().trim().max(60).nullish(),
-  lieDeg: z.number().min(40).max(90).nullish(),
-  lengthIn: z.number().min(18).max(52).nullish(),
-  shaft: z.string().trim().max(120).nullish(),
-  shaftWeightG: z.number().min(20).max(200).nullish(),
-  shaftFlex: z.string().trim().max(20).nullish(),
-  torqueDeg: z.number().min(0).max(10).nullish(),
-  grip: z.string().trim().max(120).nullish(),
-  swingWeight: z.string().trim().max(10).nullish(),
-  addedMassG: z.number().min(0).max(60).nullish(),
-  addedMassWhere: z.string().trim().max(60).nullish(),
-  notes: z.string().trim().max(2000).nullish(),
-});
+/** A change to a build's specs (PATCH /api/builds/:id): only the keys sent change; null clears one. */
+export const buildSpecBodySchema = buildSpecSchema;
 export const buildSchema = buildSpecBodySchema.extend({ id: z.string(), fittingId: z.string(), club: z.string(), label: z.string() });
 export type Build = z.infer<typeof buildSchema>;

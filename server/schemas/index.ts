@@ -6,3 +6,7 @@ export * from './fittings';
 export * from './team';
 export * from './bay-files';
 export * from './analysis';
+export * from './build-spec';
+export * from './bags';
+export * from './spec-sheets';
+export * from './workshop-settings';

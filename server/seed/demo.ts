@@ -4,6 +4,7 @@ import type { Sequelize } from 'sequelize';
 import { Build, Fitting, Player, Shop, User } from '../models';
 import { commitBayFile } from '../services/bay-files';
 import { hashPassword } from '../services/passwords';
+import { seedDemoBags, type DemoBag, type DemoChoice } from './demo-bags';
 
 interface Scenario {
   password: string;
@@ -26,7 +27,11 @@ interface Scenario {
     bayFile?: string;
     /** Specs of the builds its file names ('' for shots with no build name). */
     builds?: { club: string; label: string; spec: Partial<Build['_creationAttributes']> }[];
+    /** Builds chosen, confirmed into the bag, and the spec sheet sent. */
+    choose?: DemoChoice;
   }[];
+  /** The players' bags. */
+  bags?: DemoBag[];
 }
 
 export const DEMO_DIR = path.resolve(__dirname, '../../fixtures/demo');
@@ -46,6 +51,7 @@ export async function seedDemo(sequelize: Sequelize, now: Date, after?: DemoHook
   const scenario = readScenario();
   const passwordHash = await hashPassword(scenario.password);
   const fittings = new Map<string, Fitting>();
+  const playersByKey = new Map<string, Player>();
   await sequelize.transaction(async (transaction) => {
     const shop = await Shop.create({ name: scenario.shop.name }, { transaction });
     const staff = new Map<string, User>();
@@ -62,6 +68,7 @@ export async function seedDemo(sequelize: Sequelize, now: Date, after?: DemoHook
         userId = user.id;
       }
       players.set(key, await Player.create({ ...p, shopId: shop.id, userId }, { transaction }));
+      playersByKey.set(key, players.get(key)!);
     }
     for (const [i, f] of scenario.fittings.entries()) {
       const date = new Date(now.getTime() - f.daysAgo * 86_400_000).toISOString().slice(0, 10);
@@ -94,6 +101,11 @@ export async function seedDemo(sequelize: Sequelize, now: Date, after?: DemoHook
     await commitBayFile(sequelize, actor, fitting.id, file, { builds: { mode: 'column' } }, { maxRows: 200_000 });
     for (const b of f.builds ?? []) await Build.update(b.spec, { where: { fittingId: fitting.id, club: b.club, label: b.label } });
   }
+  const choices = [];
+  for (const [i, f] of scenario.fittings.entries()) {
+    if (f.choose) choices.push({ fitting: fittings.get(String(i))!, fitter: (await User.findOne({ where: { email: f.fitter } }))!, choose: f.choose });
+  }
+  await seedDemoBags(sequelize, now, scenario.bags ?? [], playersByKey, choices);
   if (after) await after({ sequelize, fittings, scenario });
   return true;
 }

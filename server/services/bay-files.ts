@@ -9,6 +9,7 @@ import { fillFlightFields, type Conditions } from '../../analysis/flight';
 import { ImportError, importBayFile, recipeSchema, type ImportResult, type Recipe } from '../../analysis/import';
 import { HttpError, notFound } from '../errors';
 import { BayFile, Build, Fitting, Recipe as RecipeModel } from '../models';
+import { specOf } from '../models/spec-attributes';
 import type { BayFile as BayFileDto, BuildAssignment, ImportReport, SavedRecipe, buildSpecBodySchema, importOptionsSchema } from '../schemas';
 import type { z } from 'zod';
 import { type Actor, isStaff, requireStaff } from './actor';
@@ -322,11 +323,7 @@ export async function deleteRecipe(actor: Actor, id: string): Promise<void> {
 
 // ---- builds --------------------------------------------------------------------------------
 
-const toBuild = (b: Build) => ({
-  id: b.id, fittingId: b.fittingId, club: b.club, label: b.label, head: b.head, loftDeg: b.loftDeg, hoselSetting: b.hoselSetting,
-  lieDeg: b.lieDeg, lengthIn: b.lengthIn, shaft: b.shaft, shaftWeightG: b.shaftWeightG, shaftFlex: b.shaftFlex, torqueDeg: b.torqueDeg,
-  grip: b.grip, swingWeight: b.swingWeight, addedMassG: b.addedMassG, addedMassWhere: b.addedMassWhere, notes: b.notes,
-});
+const toBuild = (b: Build) => ({ id: b.id, fittingId: b.fittingId, club: b.club, label: b.label, ...specOf(b) });
 
 export async function listBuilds(actor: Actor, fittingId: string) {
   await findVisibleFitting(actor, fittingId);

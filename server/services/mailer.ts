@@ -1,10 +1,19 @@
 import nodemailer from 'nodemailer';
 
+export interface MailAttachment {
+  filename: string;
+  content: Buffer;
+  contentType: string;
+}
+
 export interface MailMessage {
   to: string;
+  /** Copies (e.g. the shop). */
+  cc?: string[];
   subject: string;
   text: string;
   html?: string;
+  attachments?: MailAttachment[];
 }
 
 export interface Mailer {
@@ -19,7 +28,9 @@ export function createMailer(smtpUrl: string | null, from: string, log: (line: s
   if (!smtpUrl) {
     return {
       async send(m) {
-        log(`[mail not sent: no SMTP_URL] to ${m.to}: ${m.subject}\n${m.text}`);
+        const copies = m.cc?.length ? ` (copy to ${m.cc.join(', ')})` : '';
+        const files = m.attachments?.length ? `\n[attached: ${m.attachments.map((a) => `${a.filename}, ${a.content.length} bytes`).join('; ')}]` : '';
+        log(`[mail not sent: no SMTP_URL] to ${m.to}${copies}: ${m.subject}\n${m.text}${files}`);
       },
     };
   }

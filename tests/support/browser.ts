@@ -9,7 +9,7 @@ import fs from 'node:fs';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { createApp } from '@/server/app';
 import { loadConfig } from '@/server/config';
-import type { MailMessage } from '@/server/services/mailer';
+import type { MailMessage, Mailer } from '@/server/services/mailer';
 import { seedDemo } from '@/server/seed/demo';
 import { createTestDatabase } from './test-db';
 
@@ -35,8 +35,11 @@ export interface ServedApp {
   close: () => Promise<void>;
 }
 
-/** The web build from dist/ and the API on a free port, over a fresh database with the demo loaded. */
-export async function serveDemo(now = new Date()): Promise<ServedApp> {
+/**
+ * The web build from dist/ and the API on a free port, over a fresh database with the demo loaded.
+ * `mailer` replaces the capturing one (e.g. real SMTP to a test server on loopback).
+ */
+export async function serveDemo(now = new Date(), options: { mailer?: Mailer } = {}): Promise<ServedApp> {
   const { sequelize, db, drop } = await createTestDatabase();
   await seedDemo(sequelize, now);
   const config = loadConfig({
@@ -49,7 +52,7 @@ export async function serveDemo(now = new Date()): Promise<ServedApp> {
     WEB_DIST: path.resolve(__dirname, '../../dist'),
   });
   const mail: MailMessage[] = [];
-  const app = createApp({ sequelize, config, serveWeb: true, log: () => {}, mailer: { send: async (m) => void mail.push(m) } });
+  const app = createApp({ sequelize, config, serveWeb: true, log: () => {}, mailer: options.mailer ?? { send: async (m) => void mail.push(m) } });
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(0, '127.0.0.1', () => resolve(s));
   });
@@ -69,14 +72,14 @@ export async function serveDemo(now = new Date()): Promise<ServedApp> {
  * The served demo and a browser for one test file: started before its tests, closed after.
  * Read `.url` and `.browser` inside the tests (they are set in beforeAll).
  */
-export function useDemoInBrowser(): { readonly url: string; readonly browser: Browser; readonly mail: MailMessage[] } {
+export function useDemoInBrowser(options: { mailer?: () => Mailer } = {}): { readonly url: string; readonly browser: Browser; readonly mail: MailMessage[] } {
   let served: ServedApp | undefined;
   let browser: Browser | undefined;
   beforeAll(async () => {
     if (!fs.existsSync(path.resolve(__dirname, '../../dist/index.html'))) {
       throw new Error('No web build in dist/: run npm test (it builds), or npm run build:web');
     }
-    served = await serveDemo();
+    served = await serveDemo(new Date(), { mailer: options.mailer?.() });
     browser = await launchBrowser();
   });
   afterAll(async () => {

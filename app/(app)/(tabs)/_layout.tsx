@@ -34,6 +34,7 @@ export default function TabsLayout() {
         name="my-fittings"
         options={{ title: 'My fittings', tabBarIcon: icon('fittings'), href: staff ? null : undefined }}
       />
+      <Tabs.Screen name="my-bag" options={{ title: 'My bag', tabBarIcon: icon('bag'), href: staff ? null : undefined }} />
       <Tabs.Screen
         name="team"
         options={{ title: 'Team', tabBarIcon: icon('team'), href: canManageTeam(me.role) ? undefined : null }}

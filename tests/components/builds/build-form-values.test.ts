@@ -18,8 +18,9 @@ describe('parseBuildForm', () => {
     expect(result).toEqual({
       ok: true,
       body: {
-        head: null, hoselSetting: null, shaft: null, shaftFlex: null, grip: null, swingWeight: null, addedMassWhere: null, notes: null,
-        loftDeg: null, lieDeg: null, lengthIn: null, shaftWeightG: null, torqueDeg: null, addedMassG: null,
+        head: null, hoselSetting: null, shaft: null, shaftFlex: null, grip: null, gripSize: null, swingWeight: null, addedMassWhere: null, notes: null,
+        loftDeg: null, hoselLoftChangeDeg: null, hoselLieChangeDeg: null, hoselFaceChangeDeg: null, lieDeg: null, lengthIn: null,
+        shaftWeightG: null, torqueDeg: null, totalWeightG: null, balancePointIn: null, addedMassG: null,
       },
     });
   });
@@ -36,11 +37,16 @@ describe('parseBuildForm', () => {
   });
 
   it('parseBuildForm, values outside the shared schema, gives range errors per field', () => {
-    // Schema bounds (server/schemas/bay-files.ts): length 18–52 in, loft 0–90°, added mass 0–60 g.
-    const result = parseBuildForm({ ...blank, lengthIn: '53', loftDeg: '-1', addedMassG: '61' });
+    // Physical ranges (server/schemas/build-spec.ts): length 28–50 in, loft 0–70°, lie 40–80°, no negative mass.
+    const result = parseBuildForm({ ...blank, lengthIn: '51', loftDeg: '-1', lieDeg: '81', addedMassG: '-2' });
     expect(result).toEqual({
       ok: false,
-      errors: { lengthIn: 'Enter at most 52.', loftDeg: 'Enter at least 0.', addedMassG: 'Enter at most 60.' },
+      errors: {
+        lengthIn: 'Length must lie between 28 in and 50 in.',
+        loftDeg: 'Loft must lie between 0° and 70°.',
+        lieDeg: 'Lie must lie between 40° and 80°.',
+        addedMassG: 'Added mass cannot be negative.',
+      },
     });
   });
 

@@ -1,4 +1,5 @@
 import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
+import { ChooseBuildsSection } from '@/components/bag/choose-builds-section';
 import { FittingBuilds } from '@/components/builds/fitting-builds';
 import { BaySafetyNote } from '@/components/fittings/bay-safety-note';
 import { FittingAnalysisArea } from '@/components/fittings/fitting-analysis-area';
@@ -40,6 +41,7 @@ export default function FittingScreen() {
         <FittingAnalysisArea fitting={fitting} />
       </Section>
       <FittingBuilds fitting={fitting} />
+      <ChooseBuildsSection fitting={fitting} />
       <Section
         title="Details and conditions"
         action={

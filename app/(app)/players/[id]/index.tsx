@@ -48,6 +48,9 @@ export default function PlayerScreen() {
           </View>
         ) : null}
       </Section>
+      <Section title="Bag">
+        <Button title={staff ? 'Open the bag' : 'Open your bag'} variant="secondary" compact onPress={() => router.push({ pathname: '/players/[id]/bag', params: { id } })} />
+      </Section>
       <Section
         title="Fittings"
         action={

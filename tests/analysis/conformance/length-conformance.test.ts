@@ -3,14 +3,13 @@ import {
   MAX_CLUB_LENGTH_IN,
   MIN_CLUB_LENGTH_IN,
   lengthConformanceNotes,
-} from '@/components/builds/conformance';
+} from '@/analysis/conformance';
 
 // Sources for every value below:
 // - R&A / USGA, Equipment Rules (2019), Part 2, Section 1c "Length": a club's overall length is at
 //   least 18 in and, except for putters, not more than 48 in.
 // - R&A / USGA, Model Local Rule G-10 (available from 1 January 2022; announced October 2021):
 //   committees may limit the maximum length of a club, excluding putters, to 46 in.
-// (Both as summarised in /work/shared/CHECKS.md "Impact and equipment rules".)
 const codes = (club: string, lengthIn: number | null) => lengthConformanceNotes(club, lengthIn).map((n) => n.code);
 
 describe('length limits', () => {

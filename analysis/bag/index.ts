@@ -1,0 +1,15 @@
+export { bagAsOf } from './bag-as-of';
+export type { BagHistoryEntry } from './bag-as-of';
+export { calibratedReference, clubSpeedForLength, clubSpeedFromBallSpeed, estimateCarry } from './estimate-carry';
+export type { CarryEstimate, HitClub, SpeedReference } from './estimate-carry';
+export { impactLaunch, TYPICAL_HEADS } from './launch-from-loft';
+export type { ImpactHead, ImpactLaunch } from './launch-from-loft';
+export { ProposalError, proposeBagChanges } from './propose-bag-changes';
+export type { BagChange, ProposalBagClub, ProposalChoice } from './propose-bag-changes';
+export { typicalLengthIn } from './typical-length';
+export { DEFAULT_WEDGE_WEAR_LIMITS, wedgeWearReminder } from './wedge-wear';
+export type { WedgeWearLimits, WedgeWearReminder } from './wedge-wear';
+export { specNumber, specRows } from './spec-rows';
+export type { PrintableSpec } from './spec-rows';
+export { CARRY_SOURCE_WORDS, distanceText, figureLines, ladderTextRows } from './spec-sheet-text';
+export type { ChoiceFigures, LadderTextRow } from './spec-sheet-text';
