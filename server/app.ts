@@ -6,6 +6,7 @@ import path from 'node:path';
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config';
 import { authenticate } from './middleware/authenticate';
+import { precompressedStatic } from './middleware/precompressed-static';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { authRouter } from './routes/auth';
 import { bayFilesRouter } from './routes/bay-files';
@@ -74,6 +75,7 @@ export function createApp({ sequelize, config, mailer, serveWeb = false, log, co
   if (serveWeb) {
     const root = path.resolve(config.webDist);
     const index = path.join(root, 'index.html');
+    app.use(precompressedStatic(root));
     app.use(express.static(root, { index: false, setHeaders: staticCacheHeaders }));
     // SPA fallback: paths without a file extension get the app's index.html.
     app.get('/{*splat}', (req, res, next) => {

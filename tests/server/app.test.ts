@@ -7,9 +7,11 @@
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
+import zlib from 'node:zlib';
 import request from 'supertest';
 import { buildFitting, buildShopWorld } from '@/fixtures/builders';
 import { createApp } from '@/server/app';
+import { rawGet } from '../support/raw-get';
 import { signedInAgent } from '../support/sign-in';
 import { createTestContext, type TestContext } from '../support/test-db';
 
@@ -28,6 +30,9 @@ beforeAll(async () => {
   };
   write('index.html', `<!DOCTYPE html><html><body><div id="root"></div><script src="/_expo/static/js/web/entry-${HASH}.js" defer></script></body></html>`);
   write(`_expo/static/js/web/entry-${HASH}.js`, script);
+  write(`_expo/static/js/web/common-${HASH}.js`, script);
+  fs.writeFileSync(path.join(dist, `_expo/static/js/web/common-${HASH}.js.br`), zlib.brotliCompressSync(script));
+  fs.writeFileSync(path.join(dist, `_expo/static/js/web/common-${HASH}.js.gz`), zlib.gzipSync(script));
   write(`assets/node_modules/@fontsource/inter/files/inter-latin-400-normal.${HASH}.woff2`, 'wOF2 invented bytes');
   write('favicon.ico', 'icon');
   web = createApp({ sequelize: ctx.sequelize, config: { ...ctx.config, webDist: dist }, serveWeb: true, log: () => {} });
@@ -44,6 +49,24 @@ describe('createApp, web build', () => {
     expect(res.headers['cache-control']).toBe('public, max-age=31536000, immutable');
     expect(res.headers['content-encoding']).toBe('gzip');
     expect(res.text).toBe(script); // supertest decodes gzip with Node's zlib
+  });
+
+  it('static script with a brotli copy from the build is sent as that copy, decoding to the script', async () => {
+    const res = await rawGet(web, `/_expo/static/js/web/common-${HASH}.js`, { 'accept-encoding': 'gzip, deflate, br' });
+    expect(res.status).toBe(200);
+    expect(res.headers['content-encoding']).toBe('br');
+    expect(res.headers['content-type']).toMatch(/^(text|application)\/javascript/);
+    expect(res.headers['cache-control']).toBe('public, max-age=31536000, immutable');
+    expect(res.headers.vary).toMatch(/Accept-Encoding/i);
+    // Decoded by Node's zlib (RFC 7932, Brotli Compressed Data Format, 2016).
+    expect(zlib.brotliDecompressSync(res.body).toString('utf8')).toBe(script);
+  });
+
+  it('static script with a build copy goes out plain to a client that takes no compression', async () => {
+    const res = await request(web).get(`/_expo/static/js/web/common-${HASH}.js`).set('Accept-Encoding', 'identity');
+    expect(res.status).toBe(200);
+    expect(res.headers['content-encoding']).toBeUndefined();
+    expect(res.text).toBe(script);
   });
 
   it('static hashed font asset is cached a year as immutable', async () => {

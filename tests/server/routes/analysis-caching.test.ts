@@ -5,16 +5,14 @@
  * the analysis depends on, the same answers from two app instances on one database (as two
  * server processes), and the access check before any kept answer.
  */
-import type { Express } from 'express';
 import fs from 'node:fs';
-import http from 'node:http';
-import type { AddressInfo } from 'node:net';
 import path from 'node:path';
 import zlib from 'node:zlib';
 import request from 'supertest';
 import { buildFitting, buildShopWorld, TEST_PASSWORD } from '@/fixtures/builders';
 import { createApp } from '@/server/app';
 import { createTestContext, type TestContext } from '../../support/test-db';
+import { rawGet } from '../../support/raw-get';
 import { APP_HEADER, signedInAgent } from '../../support/sign-in';
 
 let ctx: TestContext;
@@ -53,24 +51,6 @@ function shorterSevens(): Buffer {
       })
       .join('\n'),
   );
-}
-
-/** The bytes as sent (supertest would decode gzip itself). */
-async function rawGet(app: Express, url: string, headers: Record<string, string>): Promise<{ headers: http.IncomingHttpHeaders; body: Buffer }> {
-  const server = app.listen(0, '127.0.0.1');
-  await new Promise((r) => server.once('listening', r));
-  const { port } = server.address() as AddressInfo;
-  try {
-    return await new Promise((resolve, reject) => {
-      http.get({ host: '127.0.0.1', port, path: url, headers }, (res) => {
-        const chunks: Buffer[] = [];
-        res.on('data', (c: Buffer) => chunks.push(c));
-        res.on('end', () => resolve({ headers: res.headers, body: Buffer.concat(chunks) }));
-      }).on('error', reject);
-    });
-  } finally {
-    server.close();
-  }
 }
 
 const analysisOf = (agent: Agent, fittingId: string) => agent.get(`/api/fittings/${fittingId}/analysis`);
