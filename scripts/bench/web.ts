@@ -86,7 +86,7 @@ export async function benchWeb(env: BenchEnv, log: (line: string) => void = () =
     log('web      skipped: no chromium found (apt-get install chromium)');
     return null;
   }
-  buildWebIfChanged(log);
+  buildWebIfChanged(log, undefined, false, true);
   const server = await env.startServer({ workers: 1, web: true });
   const browser = await launch(executable);
   try {

@@ -50,8 +50,8 @@ export function precompressBuild(dist: string): void {
   }
 }
 
-/** Runs `expo export --platform web` when needed; returns whether it built. */
-export function buildWebIfChanged(log: (line: string) => void = console.log, root = ROOT, force = false): boolean {
+/** Runs `expo export --platform web` when needed; returns whether it built. quiet: Expo's own output is left out. */
+export function buildWebIfChanged(log: (line: string) => void = console.log, root = ROOT, force = false, quiet = false): boolean {
   const dist = path.join(root, 'dist');
   const stampFile = path.join(dist, '.source-hash');
   const hash = webSourceHash(root);
@@ -62,7 +62,8 @@ export function buildWebIfChanged(log: (line: string) => void = console.log, roo
   const started = Date.now();
   const r = spawnSync('npx', ['expo', 'export', '--platform', 'web', '--output-dir', 'dist'], {
     cwd: root,
-    stdio: ['ignore', 'inherit', 'inherit'],
+    // quiet: only errors show (the bench's --json output stays JSON)
+    stdio: ['ignore', quiet ? 'ignore' : 'inherit', 'inherit'],
     env: { ...process.env, EXPO_OFFLINE: '1', EXPO_NO_TELEMETRY: '1', CI: '1' },
   });
   if (r.status !== 0) throw new Error('The web build failed (see the output above).');
