@@ -191,6 +191,14 @@ describe('GET /api/fittings/:id/analysis, kept per revision', () => {
     expect((await request(ctx.app).get(`/api/fittings/${fittingId}/analysis`).set('If-None-Match', kept.headers.etag)).status).toBe(401);
   });
 
+  it('sign-out asks the browser to drop the answers it kept', async () => {
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const res = await agent.post('/api/auth/sign-out').set(APP_HEADER);
+    expect(res.status).toBe(204);
+    // W3C, Clear Site Data (Working Draft, 2017), §3.1: the "cache" type.
+    expect(res.headers['clear-site-data']).toBe('"cache"');
+  });
+
   it('analysis kept for the fitter is the same answer its player gets; another player gets 404', async () => {
     const agent = await signedInAgent(ctx.app, world.fitter.email);
     const { fittingId } = await fittingWithDemo(agent);
