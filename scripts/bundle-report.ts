@@ -24,7 +24,8 @@ export function packageOf(source: string): string {
     const parts = s.slice(i + 'node_modules/'.length).split('/');
     return parts[0].startsWith('@') ? `${parts[0]}/${parts[1]}` : parts[0];
   }
-  const own = s.replace(/^(\.\.\/)+/, '').replace(/^.*?\/wt-[^/]+\//, '');
+  // Metro names the project's own files from the project root: "/components/ui/button.tsx".
+  const own = s.replace(/^(\.\.\/)+/, '').replace(/^\/+/, '');
   const top = own.split('/')[0];
   return top === own ? `(${own})` : `${top}/ (own)`;
 }
