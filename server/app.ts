@@ -1,3 +1,4 @@
+import compression from 'compression';
 import cookieParser from 'cookie-parser';
 import express, { type Express } from 'express';
 import fs from 'node:fs';
@@ -5,6 +6,7 @@ import path from 'node:path';
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config';
 import { authenticate } from './middleware/authenticate';
+import { precompressedStatic } from './middleware/precompressed-static';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { authRouter } from './routes/auth';
 import { bagsRouter } from './routes/bags';
@@ -18,6 +20,7 @@ import { shotsRouter } from './routes/shots';
 import { specSheetsRouter } from './routes/spec-sheets';
 import { teamRouter } from './routes/team';
 import { workshopSettingsRouter } from './routes/workshop-settings';
+import { AnalysisCache } from './services/analysis-cache';
 import type { CommitHooks } from './services/bay-files';
 import { createMailer, type Mailer } from './services/mailer';
 
@@ -32,11 +35,26 @@ export interface AppDeps {
   commitHooks?: CommitHooks;
 }
 
+/** An exported asset's name with its content hash ("inter-latin-400-normal.<md5>.woff2", "icon.<md5>@2x.png"). */
+const HASHED_ASSET = /\.[0-9a-f]{32}(@\dx)?\.[a-z0-9]+$/;
+
+/**
+ * Hashed files (everything under _expo/static, and assets named by their hash) never change
+ * under their name: cached a year, immutable. Anything else of the web build (favicon,
+ * metadata) is revalidated on each use, as index.html is.
+ */
+function staticCacheHeaders(res: express.Response, filePath: string): void {
+  const hashed = filePath.includes(`${path.sep}_expo${path.sep}static${path.sep}`) || HASHED_ASSET.test(path.basename(filePath));
+  res.setHeader('Cache-Control', hashed ? 'public, max-age=31536000, immutable' : 'no-cache');
+}
+
 /** Builds the Express app; listening is the caller's business (server/index.ts, tests). */
 export function createApp({ sequelize, config, mailer, serveWeb = false, log, commitHooks }: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   if (config.trustProxy) app.set('trust proxy', 1);
+  // gzip or brotli for API answers and the web app's files (prepared answers come compressed already).
+  app.use(compression());
 
   const api = express.Router();
   api.use(express.json({ limit: '1mb' }));
@@ -55,7 +73,7 @@ export function createApp({ sequelize, config, mailer, serveWeb = false, log, co
   api.use('/team', teamRouter());
   api.use('/recipes', recipesRouter());
   api.use(bayFilesRouter(sequelize, config, commitHooks));
-  api.use(shotsRouter(sequelize));
+  api.use(shotsRouter(sequelize, new AnalysisCache(config.analysisCacheBytes)));
   api.use(bagsRouter(sequelize));
   api.use(chosenBuildsRouter());
   api.use(specSheetsRouter(sequelize, config, mail));
@@ -66,7 +84,8 @@ export function createApp({ sequelize, config, mailer, serveWeb = false, log, co
   if (serveWeb) {
     const root = path.resolve(config.webDist);
     const index = path.join(root, 'index.html');
-    app.use(express.static(root, { index: false, maxAge: '1h' }));
+    app.use(precompressedStatic(root));
+    app.use(express.static(root, { index: false, setHeaders: staticCacheHeaders }));
     // SPA fallback: paths without a file extension get the app's index.html.
     app.get('/{*splat}', (req, res, next) => {
       if (path.extname(req.path) || !fs.existsSync(index)) return next();

@@ -28,6 +28,8 @@ const envSchema = z
     MAIL_FROM: z.string().default('Ovalyard <no-reply@ovalyard.invalid>'),
     APP_URL: z.string().optional(),
     TRUST_PROXY: boolFromEnv.default(false),
+    WORKERS: z.coerce.number().int().min(1).max(64).default(1),
+    ANALYSIS_CACHE_MB: z.coerce.number().min(0).max(4096).default(64),
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV !== 'production') return;
@@ -54,6 +56,10 @@ export interface Config {
   mail: { smtpUrl: string | null; from: string };
   appUrl: string | null;
   trustProxy: boolean;
+  /** Server processes on this machine (Node's cluster); 1 runs without one. */
+  workers: number;
+  /** Memory each process may keep for computed analysis answers, in bytes (0: none kept). */
+  analysisCacheBytes: number;
 }
 
 /**
@@ -80,5 +86,7 @@ export function loadConfig(source: Record<string, string | undefined> = process.
     mail: { smtpUrl: e.SMTP_URL ?? null, from: e.MAIL_FROM },
     appUrl: e.APP_URL ?? null,
     trustProxy: e.TRUST_PROXY,
+    workers: e.WORKERS,
+    analysisCacheBytes: Math.round(e.ANALYSIS_CACHE_MB * 1024 * 1024),
   };
 }

@@ -256,6 +256,26 @@ export function importBayFile(input: string, options: ImportOptions = {}): Impor
   const starts = new Int32Array(width + 1);
   const ends = new Int32Array(width + 1);
   const cellOf = (cells: string[] | null, i: number): string => (cells !== null ? cells[i] : rowLine.slice(starts[i], ends[i]));
+  // Club and build cells repeat a few texts row after row: compared in place against the texts
+  // seen so far in that column, a repeat costs no new string (100,000 rows made 200,000).
+  const seenTexts = new Map<number, string[]>();
+  const textOf = (cells: string[] | null, i: number): string => {
+    if (cells !== null) return cells[i];
+    const from = starts[i];
+    const length = ends[i] - from;
+    let seen = seenTexts.get(i);
+    if (seen === undefined) {
+      seen = [];
+      seenTexts.set(i, seen);
+    }
+    for (let t = 0; t < seen.length; t++) {
+      const candidate = seen[t];
+      if (candidate.length === length && rowLine.startsWith(candidate, from)) return candidate;
+    }
+    const text = rowLine.slice(from, from + length);
+    if (seen.length < 16) seen.push(text);
+    return text;
+  };
 
   /** One parsed row: a shot, a rejected row, or a skipped line. `cells` null: the row is rowLine within starts/ends. */
   const onRow = (cells: string[] | null, splitError: string | null): void => {
@@ -318,7 +338,7 @@ export function importBayFile(input: string, options: ImportOptions = {}): Impor
     }
     let club = defaultClub;
     if (clubIndex >= 0) {
-      const name = cellOf(cells, clubIndex) ?? '';
+      const name = textOf(cells, clubIndex) ?? '';
       const cached = clubCache.get(name);
       if (cached !== undefined) club = cached;
       else if (name.trim() !== '') {
@@ -331,7 +351,7 @@ export function importBayFile(input: string, options: ImportOptions = {}): Impor
     const code = club?.code ?? '';
     let build: string | null = null;
     for (let b = 0; b < buildIndexes.length; b++) {
-      const part = (cellOf(cells, buildIndexes[b]) ?? '').trim();
+      const part = (textOf(cells, buildIndexes[b]) ?? '').trim();
       if (part !== '') build = build === null ? part : `${build} / ${part}`;
     }
     if (build === null) build = buildByClub[code] ?? defaultBuild;
@@ -364,36 +384,39 @@ export function importBayFile(input: string, options: ImportOptions = {}): Impor
   if (data.indexOf('"') === -1) {
     // No quote anywhere: cells cannot hold a delimiter or a line break, so a plain split reads
     // the rows exactly as papaparse's own fast mode does, without its per-row result objects.
-    const lines = data.split(sniffed.newline);
-    if (lines.length > 0 && lines[lines.length - 1] === '') lines.pop();
+    // Lines are read in place (offsets into the text) rather than split into strings.
+    const newline = sniffed.newline;
     const delimiter = sniffed.delimiter;
-    for (let i = 0; i < lines.length; i++) {
-      const text = lines[i];
+    rowLine = data;
+    for (let lineStart = 0; lineStart < data.length; ) {
+      const lineBreak = data.indexOf(newline, lineStart);
+      const lineEnd = lineBreak === -1 ? data.length : lineBreak;
       // Cell bounds without cutting the cells; an unusual row (blank, summary, ragged) is split.
       let count = 0;
-      let pos = 0;
+      let pos = lineStart;
       for (;;) {
-        const j = text.indexOf(delimiter, pos);
+        let j = data.indexOf(delimiter, pos);
+        if (j > lineEnd) j = -1;
         if (count === width) {
           count++;
           break;
         }
         starts[count] = pos;
-        ends[count] = j === -1 ? text.length : j;
+        ends[count] = j === -1 ? lineEnd : j;
         count++;
         if (j === -1) break;
         pos = j + 1;
       }
       let first = 0;
       while (first < width && starts[first] === ends[first]) first++;
-      const firstCode = first < width ? text.charCodeAt(starts[first]) : 32;
+      const firstCode = first < width ? data.charCodeAt(starts[first]) : 32;
       const letter = ((firstCode | 32) >= 97 && (firstCode | 32) <= 122) || firstCode > 127;
       const plainRow =
-        count === width && firstCode !== 32 && firstCode !== 9 && (!letter || !summary([text.slice(starts[first], ends[first])]));
-      if (plainRow) {
-        rowLine = text;
-        onRow(null, null);
-      } else onRow(text.split(delimiter), null);
+        count === width && firstCode !== 32 && firstCode !== 9 && (!letter || !summary([data.slice(starts[first], ends[first])]));
+      if (plainRow) onRow(null, null);
+      else onRow(data.slice(lineStart, lineEnd).split(delimiter), null);
+      if (lineBreak === -1) break;
+      lineStart = lineBreak + newline.length;
     }
     if (/(\r\n|\n|\r)$/.test(data)) onRow([''], null); // as papaparse: the final break ends in an empty line
   } else {

@@ -3,7 +3,10 @@
  * notations fit it, and the column overrides sent to the server as `options.recipe.columns`.
  */
 import { FIELD_LABELS, SIDE_FIELDS, type ShotField } from '@/analysis/fields';
-import { COLUMN_TARGETS, SIDE_NOTATIONS, type ColumnSuggestion, type ColumnTarget, type Recipe, type RecipeColumn, type SideNotation } from '@/analysis/import';
+import type { ColumnSuggestion } from '@/analysis/import';
+// The recipe's lists straight from their file, as server/schemas does: the family's index would
+// bring the whole file reader (and papaparse) into every page of the web app.
+import { COLUMN_TARGETS, SIDE_NOTATIONS, type ColumnTarget, type Recipe, type RecipeColumn, type SideNotation } from '@/analysis/import/recipe';
 import { CANONICAL_UNIT, fieldDimension, findUnit, UNITS } from '@/analysis/units';
 
 /** Column overrides by header as the file writes it (the recipe's `columns`). */

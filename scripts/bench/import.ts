@@ -4,6 +4,8 @@
  * Run alone: `node --import tsx scripts/bench/import.ts`; `npm run bench` calls benchImport().
  */
 import Papa from 'papaparse';
+import v8 from 'node:v8';
+import vm from 'node:vm';
 import { importBayFile, shotValuesSchema, checkShotValues } from '@/analysis/import';
 import { seededRandom } from '../lib/seeded-random';
 
@@ -47,7 +49,15 @@ export function generateBayFile(rows: number, options: { delimiter?: ',' | ';'; 
   return `${lines.join('\n')}\n`;
 }
 
+/**
+ * A full collection before each timed run, so every run (baseline or import) starts from the
+ * same clean heap instead of paying for the garbage of the run before it.
+ */
+v8.setFlagsFromString('--expose-gc');
+const collect = vm.runInNewContext('gc') as () => void;
+
 function time(f: () => void): number {
+  collect();
   const t0 = performance.now();
   f();
   return performance.now() - t0;

@@ -4,6 +4,7 @@ import * as m0002 from './0002-bay-files';
 import * as m0003 from './0003-password-resets';
 import * as m0005 from './0005-ground-firmness';
 import * as m0007 from './0007-bags-spec-sheets';
+import * as m0008 from './0008-fitting-revision';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -14,4 +15,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '0003-password-resets', ...m0003 },
   { name: '0005-ground-firmness', ...m0005 },
   { name: '0007-bags-spec-sheets', ...m0007 },
+  { name: '0008-fitting-revision', ...m0008 },
 ];

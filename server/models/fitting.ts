@@ -17,6 +17,8 @@ export class Fitting extends Model<InferAttributes<Fitting>, InferCreationAttrib
   declare ball: string | null;
   declare notes: string | null;
   declare remote: CreationOptional<boolean>;
+  /** Raised with every change the analysis depends on (server/services/fitting-revision.ts). */
+  declare revision: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -36,6 +38,7 @@ export class Fitting extends Model<InferAttributes<Fitting>, InferCreationAttrib
         ball: { type: DataTypes.STRING(120), allowNull: true },
         notes: { type: DataTypes.TEXT, allowNull: true },
         remote: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        revision: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -29,6 +29,9 @@ export function authRouter(config: Config, mailer: Mailer): Router {
   // Signing out clears this browser's cookie; it needs no valid session.
   router.post('/auth/sign-out', (_req, res) => {
     res.clearCookie(SESSION_COOKIE, cookie);
+    // Analysis answers may be kept by the browser for revalidation (private, no-cache): dropped
+    // here, so the next person on this device finds none of them (W3C Clear Site Data).
+    res.set('Clear-Site-Data', '"cache"');
     res.status(204).end();
   });
 
@@ -50,6 +53,9 @@ export function authRouter(config: Config, mailer: Mailer): Router {
   router.post('/auth/sign-out-everywhere', authenticate(config), async (_req, res) => {
     await signOutEverywhere(actorOf(res));
     res.clearCookie(SESSION_COOKIE, cookie);
+    // Analysis answers may be kept by the browser for revalidation (private, no-cache): dropped
+    // here, so the next person on this device finds none of them (W3C Clear Site Data).
+    res.set('Clear-Site-Data', '"cache"');
     res.status(204).end();
   });
 

@@ -2,12 +2,14 @@ import { Router } from 'express';
 import { z } from 'zod';
 import type { Sequelize } from 'sequelize';
 import { actorOf } from '../middleware/authenticate';
+import { sendPreparedJson } from '../middleware/send-prepared-json';
 import { analysisQuerySchema, buildSpecBodySchema, idParamsSchema, shotDecisionBodySchema } from '../schemas';
 import { analyseFitting } from '../services/analysis';
+import { type AnalysisCache, cachedFittingAnalysis } from '../services/analysis-cache';
 import { listBuilds, updateBuild } from '../services/bay-files';
 import { listShots, setShotDecision } from '../services/shots';
 
-export function shotsRouter(sequelize: Sequelize): Router {
+export function shotsRouter(sequelize: Sequelize, analysisCache: AnalysisCache): Router {
   const router = Router();
   router.get('/fittings/:id/shots', async (req, res) => {
     const { id } = idParamsSchema.parse(req.params);
@@ -18,7 +20,12 @@ export function shotsRouter(sequelize: Sequelize): Router {
     const q = analysisQuerySchema.parse(req.query);
     const hasTo = q.toTemperatureC !== undefined || q.toAltitudeM !== undefined || q.toHumidityPct !== undefined || q.toFirmness !== undefined;
     const to = hasTo ? { temperatureC: q.toTemperatureC, altitudeM: q.toAltitudeM, humidityPct: q.toHumidityPct, firmness: q.toFirmness } : undefined;
-    res.json(await analyseFitting(sequelize, actorOf(res), id, { units: actorOf(res).units, level: q.level, includeStrays: q.all, compare: q.a && q.b ? [q.a, q.b] : undefined, to }));
+    const actor = actorOf(res);
+    // Computed once per fitting revision and query; the access check runs first every time.
+    const answer = await cachedFittingAnalysis(analysisCache, actor, id, q, () =>
+      analyseFitting(sequelize, actor, id, { units: actor.units, level: q.level, includeStrays: q.all, compare: q.a && q.b ? [q.a, q.b] : undefined, to }),
+    );
+    await sendPreparedJson(req, res, answer);
   });
   router.patch('/shots/:shotId', async (req, res) => {
     const { shotId } = z.object({ shotId: z.coerce.number().int().positive() }).parse(req.params);

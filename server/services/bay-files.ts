@@ -14,6 +14,7 @@ import type { BayFile as BayFileDto, BuildAssignment, ImportReport, SavedRecipe,
 import type { z } from 'zod';
 import { type Actor, isStaff, requireStaff } from './actor';
 import { findVisibleFitting } from './fittings';
+import { bumpFittingRevision } from './fitting-revision';
 import { decisionsOf, insertShots } from './shot-store';
 
 export type ParsedImportOptions = z.output<typeof importOptionsSchema>;
@@ -240,6 +241,7 @@ export async function commitBayFile(
     );
     await insertShots(transaction, created.id, fittingId, result.shots, new Map(), hooks.afterChunk);
     await ensureBuilds(fittingId, result.shots, transaction);
+    await bumpFittingRevision(fittingId, transaction);
     if (options.saveRecipeAs && isStaff(actor)) {
       await RecipeModel.upsert({ shopId: actor.shopId, name: options.saveRecipeAs, recipe: JSON.stringify(result.recipe), createdBy: actor.id }, { transaction });
     }
@@ -284,6 +286,7 @@ export async function remapBayFile(sequelize: Sequelize, actor: Actor, id: strin
     await sequelize.query('DELETE FROM shots WHERE bay_file_id = ?', { replacements: [bayFile.id], transaction });
     await insertShots(transaction, bayFile.id, bayFile.fittingId, result.shots, decisions);
     await ensureBuilds(bayFile.fittingId, result.shots, transaction);
+    await bumpFittingRevision(bayFile.fittingId, transaction);
     await bayFile.update(
       { recipe: JSON.stringify(result.recipe), report: JSON.stringify(reportOf(result)), rowCount: result.rows, shotCount: result.shots.length },
       { transaction },
@@ -295,7 +298,10 @@ export async function remapBayFile(sequelize: Sequelize, actor: Actor, id: strin
 export async function deleteBayFile(actor: Actor, id: string): Promise<void> {
   requireStaff(actor);
   const bayFile = await findVisibleBayFile(actor, id);
-  await bayFile.destroy(); // shots go with it (ON DELETE CASCADE)
+  await BayFile.sequelize!.transaction(async (transaction) => {
+    await bayFile.destroy({ transaction }); // shots go with it (ON DELETE CASCADE)
+    await bumpFittingRevision(bayFile.fittingId, transaction);
+  });
 }
 
 // ---- saved recipes of a shop -------------------------------------------------------------
@@ -338,6 +344,9 @@ export async function updateBuild(actor: Actor, id: string, body: z.output<typeo
     throw notFound('That build');
   });
   for (const [key, value] of Object.entries(body)) if (value !== undefined) build.set(key as keyof typeof body, value as never);
-  await build.save();
+  await Build.sequelize!.transaction(async (transaction) => {
+    await build.save({ transaction });
+    await bumpFittingRevision(build.fittingId, transaction);
+  });
   return toBuild(build);
 }

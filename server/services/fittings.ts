@@ -4,6 +4,7 @@ import { HttpError, notFound } from '../errors';
 import { Fitting as FittingModel, Player, User } from '../models';
 import type { Fitting, FittingFilters, fittingBodySchema, fittingUpdateSchema } from '../schemas';
 import { type Actor, isStaff, requireStaff } from './actor';
+import { bumpFittingRevision } from './fitting-revision';
 import { findVisiblePlayer } from './players';
 import { countShotsByFitting } from './shot-store';
 
@@ -103,6 +104,9 @@ export async function updateFitting(actor: Actor, id: string, body: z.output<typ
   for (const [key, value] of Object.entries(changes)) {
     if (value !== undefined) fitting.set(key as keyof typeof changes, value as never);
   }
-  await fitting.save();
+  await FittingModel.sequelize!.transaction(async (transaction) => {
+    await fitting.save({ transaction });
+    await bumpFittingRevision(id, transaction);
+  });
   return getFitting(actor, id);
 }

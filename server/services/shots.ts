@@ -2,6 +2,7 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import { notFound } from '../errors';
 import { type Actor, requireStaff } from './actor';
 import { findVisibleFitting } from './fittings';
+import { bumpFittingRevision } from './fitting-revision';
 import { loadFittingShots, type StoredShot } from './shot-store';
 
 export async function listShots(sequelize: Sequelize, actor: Actor, fittingId: string): Promise<StoredShot[]> {
@@ -20,6 +21,9 @@ export async function setShotDecision(sequelize: Sequelize, actor: Actor, shotId
   await findVisibleFitting(actor, rows[0].fitting_id).catch(() => {
     throw notFound('That shot');
   });
-  await sequelize.query('UPDATE shots SET decision = ? WHERE id = ?', { replacements: [decision, shotId], type: QueryTypes.UPDATE });
+  await sequelize.transaction(async (transaction) => {
+    await sequelize.query('UPDATE shots SET decision = ? WHERE id = ?', { replacements: [decision, shotId], type: QueryTypes.UPDATE, transaction });
+    await bumpFittingRevision(rows[0].fitting_id, transaction);
+  });
   return { id: shotId, decision };
 }

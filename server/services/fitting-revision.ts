@@ -1,0 +1,18 @@
+/**
+ * A fitting's revision (fittings.revision, migration 0008): one number, raised in the same
+ * transaction as every change to what the fitting's analysis is computed from, so a reader sees
+ * either the old data with the old number or the new data with the new one. Every change of
+ * that kind calls bumpFittingRevision: a bay file stored, re-mapped or deleted, a stray
+ * decision, a build edited, the fitting's conditions edited.
+ */
+import { QueryTypes, type Transaction } from 'sequelize';
+import { Fitting } from '../models';
+
+/** Raises a fitting's revision; pass the transaction of the change it marks. One UPDATE. */
+export async function bumpFittingRevision(fittingId: string, transaction?: Transaction): Promise<void> {
+  await Fitting.sequelize!.query('UPDATE fittings SET revision = revision + 1 WHERE id = ?', {
+    replacements: [fittingId],
+    type: QueryTypes.UPDATE,
+    transaction,
+  });
+}
