@@ -1,19 +1,24 @@
-import { Redirect, Stack } from 'expo-router';
+import { Redirect, Stack, useRouter, useSegments } from 'expo-router';
+import { useMemo } from 'react';
+import { mayOpen } from '@/components/session/route-access';
 import { useSession } from '@/components/session/session-provider';
 import { ErrorState } from '@/components/ui/error-state';
 import { LoadingState } from '@/components/ui/loading-state';
 import { Screen } from '@/components/ui/screen';
-import { HeaderHomeButton } from '@/components/ui/header-home-button';
-import { headerOptions } from '@/components/ui/stack-options';
+import { screenColors, stackHeader } from '@/components/ui/stack-options';
 
 export { ErrorBoundary } from 'expo-router';
 
 /**
- * Signed-in part of the app. GET /api/me decides: no session → sign-in. The guard is a
+ * Signed-in part of the app. GET /api/me decides: no session → sign-in; a page the role may not
+ * open (components/session/route-access.ts) → the role's start page. The guards are a
  * convenience; the server authorises every request again.
  */
 export default function AppLayout() {
   const session = useSession();
+  const segments = useSegments();
+  const router = useRouter();
+  const header = useMemo(() => stackHeader(() => router.replace('/')), [router]);
   if (session.status === 'loading') return <LoadingState label="Checking your session…" />;
   if (session.status === 'signed-out') return <Redirect href="/sign-in" />;
   if (session.status === 'error') {
@@ -23,15 +28,9 @@ export default function AppLayout() {
       </Screen>
     );
   }
+  if (!mayOpen(session.me.role, segments)) return <Redirect href="/" />;
   return (
-    <Stack
-      screenOptions={({ navigation }) => ({
-        ...headerOptions,
-        headerBackTitle: 'Back',
-        // A page opened by its address has no history: offer the way to the start page instead.
-        ...(navigation.canGoBack() ? {} : { headerLeft: () => <HeaderHomeButton /> }),
-      })}
-    >
+    <Stack screenOptions={{ ...screenColors, header }}>
       <Stack.Screen name="(tabs)" options={{ headerShown: false }} />
     </Stack>
   );

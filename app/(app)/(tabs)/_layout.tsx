@@ -2,7 +2,7 @@ import { Tabs } from 'expo-router';
 import type { ColorValue } from 'react-native';
 import { canManageTeam, isStaff } from '@/components/session/permissions';
 import { useMe } from '@/components/session/session-provider';
-import { headerOptions } from '@/components/ui/stack-options';
+import { tabHeader } from '@/components/ui/stack-options';
 import { TabIcon, type TabIconName } from '@/components/ui/tab-icon';
 import { colors, fonts } from '@/components/theme';
 
@@ -20,7 +20,7 @@ export default function TabsLayout() {
   return (
     <Tabs
       screenOptions={{
-        ...headerOptions,
+        header: tabHeader,
         sceneStyle: { backgroundColor: colors.paper },
         tabBarActiveTintColor: colors.accent,
         tabBarInactiveTintColor: colors.textMuted,
