@@ -8,6 +8,7 @@ import { authenticate } from './middleware/authenticate';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { authRouter } from './routes/auth';
 import { bayFilesRouter } from './routes/bay-files';
+import { demoRouter } from './routes/demo';
 import { fittingsRouter } from './routes/fittings';
 import { healthRouter } from './routes/health';
 import { playersRouter } from './routes/players';
@@ -42,6 +43,7 @@ export function createApp({ sequelize, config, mailer, serveWeb = false, log, co
     next();
   });
   api.use('/health', healthRouter(sequelize));
+  api.use('/demo', demoRouter());
   api.use(authRouter(config, mailer ?? createMailer(config.mail.smtpUrl, config.mail.from)));
   // Everything below needs a signed-in user; each service checks role and shop again.
   api.use(['/players', '/fittings', '/team', '/recipes', '/bay-files', '/shots', '/builds'], authenticate(config));

@@ -4,7 +4,7 @@ import type { Sequelize } from 'sequelize';
 import { actorOf } from '../middleware/authenticate';
 import { analysisQuerySchema, buildSpecBodySchema, idParamsSchema, shotDecisionBodySchema } from '../schemas';
 import { analyseFitting } from '../services/analysis';
-import { listBuilds, updateBuild } from '../services/bay-files';
+import { getBuild, listBuilds, updateBuild } from '../services/bay-files';
 import { listShots, setShotDecision } from '../services/shots';
 
 export function shotsRouter(sequelize: Sequelize): Router {
@@ -28,6 +28,10 @@ export function shotsRouter(sequelize: Sequelize): Router {
   router.get('/fittings/:id/builds', async (req, res) => {
     const { id } = idParamsSchema.parse(req.params);
     res.json(await listBuilds(actorOf(res), id));
+  });
+  router.get('/builds/:id', async (req, res) => {
+    const { id } = idParamsSchema.parse(req.params);
+    res.json(await getBuild(actorOf(res), id));
   });
   router.patch('/builds/:id', async (req, res) => {
     const { id } = idParamsSchema.parse(req.params);

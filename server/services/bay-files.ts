@@ -333,13 +333,24 @@ export async function listBuilds(actor: Actor, fittingId: string) {
   return (await Build.findAll({ where: { fittingId }, order: [['club', 'ASC'], ['label', 'ASC']] })).map(toBuild);
 }
 
-export async function updateBuild(actor: Actor, id: string, body: z.output<typeof buildSpecBodySchema>) {
-  requireStaff(actor);
+/** A build of a fitting the actor may see, or 404 (another shop's or player's answers the same). */
+async function findVisibleBuild(actor: Actor, id: string): Promise<Build> {
   const build = await Build.findByPk(id);
   if (!build) throw notFound('That build');
   await findVisibleFitting(actor, build.fittingId).catch(() => {
     throw notFound('That build');
   });
+  return build;
+}
+
+/** One build by its id (its edit page opened by address needs no fitting id). */
+export async function getBuild(actor: Actor, id: string) {
+  return toBuild(await findVisibleBuild(actor, id));
+}
+
+export async function updateBuild(actor: Actor, id: string, body: z.output<typeof buildSpecBodySchema>) {
+  requireStaff(actor);
+  const build = await findVisibleBuild(actor, id);
   for (const [key, value] of Object.entries(body)) if (value !== undefined) build.set(key as keyof typeof body, value as never);
   await build.save();
   return toBuild(build);
