@@ -1,24 +1,39 @@
 /**
- * The preview table's columns and cells: club, build and a few key fields of each converted shot,
- * in the user's units.
+ * The preview table's columns and cells: club, build and the key fields of each converted shot,
+ * in the user's units; left/right fields with their side letter, so a mirrored file shows.
  */
-import type { Shot, ShotField } from '@/analysis/fields';
+import { SIDE_FIELDS, type Shot, type ShotField } from '@/analysis/fields';
 import { displayUnits, findUnit, type UnitSystem } from '@/analysis/units';
 import { fieldNumber, formatLettered } from '../format-field';
 import { TARGET_LABELS } from './recipe-edit';
 
-/** Fields the preview shows when the shots have them, in this order. */
-export const PREVIEW_FIELDS: readonly ShotField[] = ['ballSpeed', 'clubSpeed', 'launchAngle', 'spinRate', 'carry', 'offline', 'total'];
-
+/**
+ * Fields the preview shows when the shots have them, in this order: speeds and launch, spin,
+ * then where the ball went (carry, offline, total). Offline and launch direction are in, so a
+ * left/right mistake is caught before the import.
+ */
+export const PREVIEW_FIELDS: readonly ShotField[] = [
+  'ballSpeed',
+  'clubSpeed',
+  'launchAngle',
+  'launchDirection',
+  'spinRate',
+  'spinAxis',
+  'carry',
+  'offline',
+  'total',
+];
 
 export type PreviewColumn = { field: ShotField; title: string; unit: string };
 
-/** The preview fields that at least one shot has, with their title and display unit. */
-export function previewColumns(shots: readonly Shot[], system: UnitSystem, max = 5): PreviewColumn[] {
+/** The preview fields that at least one shot has, with their title and display unit. O(shots × fields). */
+export function previewColumns(shots: readonly Shot[], system: UnitSystem): PreviewColumn[] {
   const units = displayUnits(system);
-  return PREVIEW_FIELDS.filter((f) => shots.some((s) => s.values[f] !== undefined))
-    .slice(0, max)
-    .map((field) => ({ field, title: TARGET_LABELS[field], unit: findUnit(units[field])?.label ?? units[field] }));
+  return PREVIEW_FIELDS.filter((f) => shots.some((s) => s.values[f] !== undefined)).map((field) => ({
+    field,
+    title: TARGET_LABELS[field],
+    unit: findUnit(units[field])?.label ?? units[field],
+  }));
 }
 
 /**
@@ -28,5 +43,5 @@ export function previewColumns(shots: readonly Shot[], system: UnitSystem, max =
  */
 export function formatShotValue(shot: Shot, field: ShotField, system: UnitSystem): string {
   const v = shot.values[field];
-  return field === 'offline' || field === 'launchDirection' ? formatLettered(v, field, system) : fieldNumber(v, field, system);
+  return SIDE_FIELDS.has(field) ? formatLettered(v, field, system) : fieldNumber(v, field, system);
 }

@@ -11,7 +11,7 @@ import { HttpError, notFound } from '../errors';
 import { BayFile, Build, Fitting, Recipe as RecipeModel } from '../models';
 import type { BayFile as BayFileDto, BuildAssignment, ImportReport, SavedRecipe, buildSpecBodySchema, importOptionsSchema } from '../schemas';
 import type { z } from 'zod';
-import { type Actor, isStaff, requireStaff } from './actor';
+import { type Actor, isStaff, requireOwner, requireStaff } from './actor';
 import { findVisibleFitting } from './fittings';
 import { decisionsOf, insertShots } from './shot-store';
 
@@ -160,6 +160,8 @@ export async function previewBayFile(actor: Actor, fittingId: string, file: Uplo
     sniff: result.sniff,
     recipe: result.recipe,
     suggestions: result.suggestions,
+    /** Guesses the fitter should confirm (a sign convention assumed, a unit inferred…). */
+    ambiguous: result.ambiguous,
     report: reportOf(result),
     shots: result.shots.slice(0, 25),
   };
@@ -312,6 +314,28 @@ export async function saveRecipe(actor: Actor, name: string, recipe: Recipe): Pr
     throw new HttpError(409, 'RECIPE_NAME_TAKEN', 'Your shop already has a recipe with that name.');
   }
   return toSaved(await RecipeModel.create({ shopId: actor.shopId, name, recipe: JSON.stringify(recipe), createdBy: actor.id }));
+}
+
+/** One saved recipe of the actor's shop (staff), or 404. */
+export async function getRecipe(actor: Actor, id: string): Promise<SavedRecipe> {
+  requireStaff(actor);
+  const recipe = await RecipeModel.findOne({ where: { id, shopId: actor.shopId } });
+  if (!recipe) throw notFound('That recipe');
+  return toSaved(recipe);
+}
+
+/** Renames a saved recipe (the owner manages the shop's recipes); a name the shop uses already answers 409. */
+export async function renameRecipe(actor: Actor, id: string, name: string): Promise<SavedRecipe> {
+  requireOwner(actor);
+  const recipe = await RecipeModel.findOne({ where: { id, shopId: actor.shopId } });
+  if (!recipe) throw notFound('That recipe');
+  if (recipe.name === name) return toSaved(recipe);
+  if (await RecipeModel.findOne({ where: { shopId: actor.shopId, name } })) {
+    throw new HttpError(409, 'RECIPE_NAME_TAKEN', 'Your shop already has a recipe with that name.');
+  }
+  recipe.name = name;
+  await recipe.save();
+  return toSaved(recipe);
 }
 
 export async function deleteRecipe(actor: Actor, id: string): Promise<void> {
