@@ -1,6 +1,6 @@
-import { Redirect, Stack, useRouter, useSegments } from 'expo-router';
+import { Redirect, Stack, useRouter } from 'expo-router';
 import { useMemo } from 'react';
-import { mayOpen } from '@/components/session/route-access';
+import { guardedScreen } from '@/components/session/route-guard';
 import { useSession } from '@/components/session/session-provider';
 import { ErrorState } from '@/components/ui/error-state';
 import { LoadingState } from '@/components/ui/loading-state';
@@ -11,12 +11,11 @@ export { ErrorBoundary } from 'expo-router';
 
 /**
  * Signed-in part of the app. GET /api/me decides: no session → sign-in; a page the role may not
- * open (components/session/route-access.ts) → the role's start page. The guards are a
+ * open (components/session/route-access.ts) → the role's start page, from inside the Stack. The guards are a
  * convenience; the server authorises every request again.
  */
 export default function AppLayout() {
   const session = useSession();
-  const segments = useSegments();
   const router = useRouter();
   const header = useMemo(() => stackHeader(() => router.replace('/')), [router]);
   if (session.status === 'loading') return <LoadingState label="Checking your session…" />;
@@ -28,9 +27,8 @@ export default function AppLayout() {
       </Screen>
     );
   }
-  if (!mayOpen(session.me.role, segments)) return <Redirect href="/" />;
   return (
-    <Stack screenOptions={{ ...screenColors, header }}>
+    <Stack screenOptions={{ ...screenColors, header }} screenLayout={guardedScreen}>
       <Stack.Screen name="(tabs)" options={{ headerShown: false }} />
     </Stack>
   );

@@ -8,8 +8,8 @@ const PLAYER: readonly Role[] = ['player'];
 /**
  * Who may open each signed-in page, by its route as Expo Router names it (groups left out).
  * A page a role may not open sends it to its start page. Convenience only: the server checks
- * every request again (a player opening another player's page gets a 404 from it, and a player
- * importing into a fitting that is not remote a 403).
+ * every request again (a player opening another player's page gets a 404 from it). The import
+ * page also sends a player home from a fitting that is not remote (only the data can say).
  */
 export const ROUTE_ACCESS: Readonly<Record<string, readonly Role[]>> = {
   '/': EVERYONE,
@@ -24,7 +24,7 @@ export const ROUTE_ACCESS: Readonly<Record<string, readonly Role[]>> = {
   '/fittings/[id]': EVERYONE,
   '/fittings/[id]/edit': STAFF,
   '/fittings/[id]/import': EVERYONE,
-  '/bay-files/[id]/remap': EVERYONE,
+  '/bay-files/[id]/remap': STAFF,
   '/builds/[id]/edit': STAFF,
   '/my-fittings': PLAYER,
   '/team': OWNER,
@@ -39,6 +39,15 @@ export const ROUTE_ACCESS: Readonly<Record<string, readonly Role[]>> = {
  */
 export function routeOf(segments: readonly string[]): string {
   return '/' + segments.filter((s) => !(s.startsWith('(') && s.endsWith(')'))).join('/');
+}
+
+/**
+ * Whether a role may open a navigator's route by its name ("players/new", "fittings/[id]/index",
+ * "(tabs)", a tab's "team"): its route with "/index" and the groups left out.
+ * @example mayOpenRoute('fitter', 'team') // => false
+ */
+export function mayOpenRoute(role: Role, routeName: string): boolean {
+  return mayOpen(role, routeName.split('/').filter((s) => s !== 'index'));
 }
 
 /**

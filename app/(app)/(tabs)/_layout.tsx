@@ -1,6 +1,7 @@
 import { Tabs } from 'expo-router';
 import type { ColorValue } from 'react-native';
 import { canManageTeam, isStaff } from '@/components/session/permissions';
+import { guardedScreen } from '@/components/session/route-guard';
 import { useMe } from '@/components/session/session-provider';
 import { tabHeader } from '@/components/ui/stack-options';
 import { TabIcon, type TabIconName } from '@/components/ui/tab-icon';
@@ -19,6 +20,7 @@ export default function TabsLayout() {
   const staff = isStaff(me.role);
   return (
     <Tabs
+      screenLayout={guardedScreen}
       screenOptions={{
         header: tabHeader,
         sceneStyle: { backgroundColor: colors.paper },
