@@ -14,8 +14,11 @@ const text = (s: string | null | undefined): string | null => {
   return t ? t : null;
 };
 
+/** A no-break space: a number stays with its unit and label when a line wraps ("Length 46 in"). */
+export const NBSP = '\u00a0';
+
 /** Adds `word` after `value` unless the value already says it ("R" → "R flex", "Stiff flex" stays). */
-const withWord = (value: string, word: string): string => (value.toLowerCase().includes(word) ? value : `${value} ${word}`);
+const withWord = (value: string, word: string): string => (value.toLowerCase().includes(word) ? value : `${value}${NBSP}${word}`);
 
 /** "Label: value" for free text, unless the value already starts with the label ("Hosel 3"). */
 const labelled = (label: string, value: string): string =>
@@ -30,7 +33,8 @@ const joinParts = (parts: readonly (string | null)[]): string | null => {
  * A build's specs as labelled lines, in workshop order: the head and its geometry (head, loft,
  * hosel, lie, length), the shaft (name, weight, flex, torque), then grip, swing weight and added
  * mass. Every part says what it is, so a number in a shaft's name is not read as its weight.
- * Notes are left out; lines with nothing set are left out. O(1).
+ * A number is joined to its unit and label by no-break spaces, so a narrow screen wraps between
+ * parts, not inside one. Notes are left out; lines with nothing set are left out. O(1).
  * @example buildSpecLines({ shaft: 'Test graphite 75', shaftWeightG: 75, shaftFlex: 'R' }) // => ['Shaft: Test graphite 75 · 75 g · R flex']
  */
 export function buildSpecLines(spec: Partial<BuildSpec>): string[] {
@@ -42,24 +46,24 @@ export function buildSpecLines(spec: Partial<BuildSpec>): string[] {
   const swingWeight = text(spec.swingWeight);
   const where = text(spec.addedMassWhere);
   const shaftParts = [
-    spec.shaftWeightG == null ? null : `${specNumber(spec.shaftWeightG)} g`,
+    spec.shaftWeightG == null ? null : `${specNumber(spec.shaftWeightG)}${NBSP}g`,
     flex && withWord(flex, 'flex'),
-    spec.torqueDeg == null ? null : `${specNumber(spec.torqueDeg)}° torque`,
+    spec.torqueDeg == null ? null : `${specNumber(spec.torqueDeg)}°${NBSP}torque`,
   ];
   const shaftLine = joinParts([shaft, ...shaftParts]);
   let mass: string | null = null;
-  if (spec.addedMassG != null) mass = `Added mass: ${specNumber(spec.addedMassG)} g${where ? ` ${where}` : ''}`;
+  if (spec.addedMassG != null) mass = `Added mass: ${specNumber(spec.addedMassG)}${NBSP}g${where ? ` ${where}` : ''}`;
   else if (where) mass = `Added mass: ${where}`;
   const lines = [
     joinParts([
       head && labelled('Head', head),
-      spec.loftDeg == null ? null : `Loft ${specNumber(spec.loftDeg)}°`,
+      spec.loftDeg == null ? null : `Loft${NBSP}${specNumber(spec.loftDeg)}°`,
       hosel && labelled('Hosel', hosel),
-      spec.lieDeg == null ? null : `Lie ${specNumber(spec.lieDeg)}°`,
-      spec.lengthIn == null ? null : `Length ${specNumber(spec.lengthIn)} in`,
+      spec.lieDeg == null ? null : `Lie${NBSP}${specNumber(spec.lieDeg)}°`,
+      spec.lengthIn == null ? null : `Length${NBSP}${specNumber(spec.lengthIn)}${NBSP}in`,
     ]),
     shaftLine && (shaft ? labelled('Shaft', shaftLine) : `Shaft: ${shaftLine}`),
-    joinParts([grip && labelled('Grip', grip), swingWeight && `Swing weight ${swingWeight}`, mass]),
+    joinParts([grip && labelled('Grip', grip), swingWeight && `Swing${NBSP}weight${NBSP}${swingWeight}`, mass]),
   ];
   return lines.filter((l): l is string => l !== null);
 }

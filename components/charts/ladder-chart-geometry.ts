@@ -57,7 +57,7 @@ export type LadderGeometry = {
 };
 
 export const LADDER_ROW_PX = 44;
-export const LADDER_MARGIN = { top: 8, bottom: 36, labelColumn: 64, gapColumn: 104, right: 4 } as const;
+export const LADDER_MARGIN = { top: 8, bottom: 36, labelColumn: 64, gapColumn: 112, right: 4 } as const;
 
 /** The word that goes with a carry-gap flag, so a flag is never told by colour alone. */
 export const GAP_FLAG_WORDS: Readonly<Record<Exclude<GapFlag, null>, string>> = {
@@ -87,7 +87,7 @@ export function ladderClubLabel(code: string): string {
 }
 
 /** Width per character of the 13 px row labels, a little over Inter's average (px). */
-const LABEL_CHAR_PX = 7.4;
+const LABEL_CHAR_PX = 7;
 
 /** The label column: wide enough for the longest club name of the ladder (at least the margin's). */
 function labelColumnPx(labels: readonly string[]): number {

@@ -29,7 +29,8 @@ export function FittingFilterBar({ value, onChange }: FittingFilterBarProps) {
   const set = <K extends keyof FittingFilterText>(key: K) => (v: FittingFilterText[K]) => onChange({ ...value, [key]: v });
   return (
     <View style={styles.bar}>
-      <FormRow basisPx={220}>
+      {/* One row on a wide screen; on a phone the search, the two dates side by side, then the order. */}
+      <FormRow basisPx={290}>
         <TextField
           label="Search by player"
           value={value.q}
@@ -39,11 +40,11 @@ export function FittingFilterBar({ value, onChange }: FittingFilterBarProps) {
           autoCorrect={false}
           inputMode="search"
         />
+        <FormRow basisPx={130}>
+          <DateField label="From" value={value.from} onChange={set('from')} max={value.to || undefined} />
+          <DateField label="To" value={value.to} onChange={set('to')} min={value.from || undefined} />
+        </FormRow>
         <SelectField label="Sort" value={value.sort} options={SORTS} onChange={set('sort')} />
-      </FormRow>
-      <FormRow basisPx={140}>
-        <DateField label="From" value={value.from} onChange={set('from')} max={value.to || undefined} />
-        <DateField label="To" value={value.to} onChange={set('to')} min={value.from || undefined} />
       </FormRow>
       {hasFittingFilters(value) ? (
         <Button title="Clear the filters" variant="quiet" compact onPress={() => onChange({ ...NO_FITTING_FILTERS, sort: value.sort })} />

@@ -53,7 +53,7 @@ export function FittingForm({ fitting, playerId, submitTitle, busy, error, onSub
       ) : (
         <PlayerPicker playerId={text.playerId} onChange={set('playerId')} error={shown.playerId} />
       )}
-      <FormRow>
+      <FormRow basisPx={240}>
         <DateField label="Date" value={text.date} onChange={set('date')} error={shown.date} />
         <ChoiceField label="Venue" value={text.venue} options={VENUES} onChange={set('venue')} />
       </FormRow>

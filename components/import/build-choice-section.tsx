@@ -27,7 +27,7 @@ export function BuildChoiceSection({ value, onChange, clubs, hasBuildColumn }: B
           <AppText tone="muted">
             {hasBuildColumn
               ? 'Each shot takes the build its row names.'
-              : 'No column is read as the build. Set a column to "Build" above, or choose another way.'}
+              : 'No column is read as the build. Set a column to “Build” above, or choose another way.'}
           </AppText>
           <TextField
             label="Build for rows without one"

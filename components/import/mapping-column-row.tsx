@@ -27,13 +27,14 @@ type MappingColumnRowProps = {
 /** One column of the file: its header and samples as written, and what Ovalyard reads it as. */
 export function MappingColumnRow({ suggestion, column, note, onField, onUnit, onSide }: MappingColumnRowProps) {
   const header = suggestion.header;
-  const low = note.attention;
+  // A doubtful reading of the column stands out; an open sign question is asked below instead.
+  const low = note.attention && !note.question;
   const units = unitOptionsFor(column.field);
   const unit = unitName(column.unit) ?? '';
   const unitChoices = unit || units.length === 0 ? units : [{ value: '', label: `Choose (file says "${column.unit ?? '?'}")` }, ...units];
   const ignored = column.field === 'ignore';
   return (
-    <View style={[styles.row, low && styles.low, ignored && styles.ignored]} accessibilityLabel={`Column ${header}`}>
+    <View style={[styles.row, (low || note.question) && styles.low, ignored && styles.ignored]} accessibilityLabel={`Column ${header}`}>
       <View style={styles.head}>
         <AppText variant="bodyStrong" style={styles.header} numberOfLines={2}>
           {header}
@@ -70,7 +71,7 @@ export function MappingColumnRow({ suggestion, column, note, onField, onUnit, on
       {note.question ? (
         <View style={styles.question}>
           <ChoiceField<SideNotation | ''>
-            label={`In "${header}", which way does + point?`}
+            label={`In “${header}”, which way does + point?`}
             value=""
             options={SIGN_ANSWERS}
             onChange={(side) => side && onSide(side)}

@@ -25,6 +25,10 @@ type MappingStepProps = {
   buildsFromColumn: boolean;
 };
 
+/** "a", "a and b", "a, b and c". */
+const listWords = (items: readonly string[]): string =>
+  items.length < 2 ? (items[0] ?? '') : `${items.slice(0, -1).join(', ')} and ${items[items.length - 1]}`;
+
 const DELIMITER_WORDS = { ',': 'commas', ';': 'semicolons', '\t': 'tabs' } as const;
 
 /** One row per column of the file; every edit re-runs the preview. */
@@ -45,7 +49,7 @@ export function MappingStep({ session, preview, base, fromRecipe = false, hasBui
       <AppText tone="muted">{read.join(', ') + '.'}</AppText>
       {session.signQuestions.length > 0 ? (
         <Notice tone="caution" title={session.signQuestions.length === 1 ? 'A question about left and right' : 'Questions about left and right'}>
-          {`The file gives ${session.signQuestions.map((h) => `"${h}"`).join(' and ')} as signed numbers and does not say which way + points. Answer on ${session.signQuestions.length === 1 ? 'its row' : 'their rows'} below: a wrong guess mirrors every shot.`}
+          {`The file gives ${listWords(session.signQuestions.map((h) => `“${h}”`))} as signed numbers and does not say which way + points. Answer on ${session.signQuestions.length === 1 ? 'its row' : 'their rows'} below: a wrong guess mirrors every shot.`}
         </Notice>
       ) : null}
       {!hasBuildColumn && buildsFromColumn ? (

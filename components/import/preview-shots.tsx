@@ -10,13 +10,13 @@ import { formatShotValue, previewColumns } from './shot-columns';
 
 type PreviewShotsProps = { shots: readonly Shot[]; total: number; units: UnitSystem };
 
-const WIDTH = { row: 40, club: 108, build: 96, value: 76 } as const;
-const HEAD_PX = 44;
+const WIDTH = { row: 42, club: 100, build: 104, value: 80 } as const;
+const HEAD_PX = 60;
 const LINE_PX = 30;
 
 /**
  * The first converted shots as a compact table: row and club stay pinned on the left while the
- * build and the fields scroll sideways (with a hint when they do not fit), full club names,
+ * fields and the build scroll sideways (with a hint when they do not fit), full club names,
  * left/right values with their side letter.
  */
 export function PreviewShots({ shots, total, units }: PreviewShotsProps) {
@@ -26,7 +26,7 @@ export function PreviewShots({ shots, total, units }: PreviewShotsProps) {
   if (shots.length === 0) return <AppText tone="muted">No row of this file converts to a shot with this mapping.</AppText>;
   const cell = (text: string, width: number, key: string, head = false, right = false) => (
     <View key={key} style={[styles.cell, { width, height: head ? HEAD_PX : LINE_PX }, head && styles.headCell]}>
-      <AppText variant={head ? 'label' : 'caption'} numberOfLines={head ? 2 : 1} style={right && styles.right}>
+      <AppText variant={head ? 'label' : 'caption'} numberOfLines={head ? 3 : 1} style={right && styles.right}>
         {text}
       </AppText>
     </View>
@@ -60,15 +60,15 @@ export function PreviewShots({ shots, total, units }: PreviewShotsProps) {
         >
           <View>
             <View style={lineStyle(true)}>
-              {cell('Build', WIDTH.build, 'build', true)}
               {columns.map((c) => cell(c.unit ? `${c.title}\n${c.unit}` : c.title, WIDTH.value, c.field, true, true))}
+              {cell('Build', WIDTH.build, 'build', true)}
             </View>
             {shots.map((s) => (
               <View key={s.row} style={lineStyle(false)}>
-                {cell(s.build ?? '–', WIDTH.build, 'build')}
                 {columns.map((c) =>
                   cell(formatShotValue(s, c.field, units) + (s.derived.includes(c.field) ? '*' : ''), WIDTH.value, c.field, false, true),
                 )}
+                {cell(s.build ?? '–', WIDTH.build, 'build')}
               </View>
             ))}
           </View>
@@ -93,7 +93,7 @@ const styles = StyleSheet.create({
   scroll: { flex: 1 },
   line: { flexDirection: 'row', borderBottomWidth: StyleSheet.hairlineWidth, borderBottomColor: colors.border },
   headLine: { borderBottomColor: colors.ink, borderBottomWidth: 1 },
-  cell: { paddingHorizontal: 4, justifyContent: 'center' },
+  cell: { paddingHorizontal: 6, justifyContent: 'center' },
   headCell: { justifyContent: 'flex-end', paddingBottom: 4 },
   right: { textAlign: 'right' },
 });

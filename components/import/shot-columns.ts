@@ -8,20 +8,21 @@ import { fieldNumber, formatLettered } from '../format-field';
 import { TARGET_LABELS } from './recipe-edit';
 
 /**
- * Fields the preview shows when the shots have them, in this order: speeds and launch, spin,
- * then where the ball went (carry, offline, total). Offline and launch direction are in, so a
- * left/right mistake is caught before the import.
+ * Fields the preview shows when the shots have them, in this order: where the ball went (carry,
+ * offline, total), its left/right start and curve (launch direction, spin axis), then speeds,
+ * launch and spin. The left/right fields come early, so a mirrored file is caught before the
+ * import, on a phone too.
  */
 export const PREVIEW_FIELDS: readonly ShotField[] = [
-  'ballSpeed',
-  'clubSpeed',
-  'launchAngle',
-  'launchDirection',
-  'spinRate',
-  'spinAxis',
   'carry',
   'offline',
   'total',
+  'launchDirection',
+  'spinAxis',
+  'ballSpeed',
+  'clubSpeed',
+  'launchAngle',
+  'spinRate',
 ];
 
 export type PreviewColumn = { field: ShotField; title: string; unit: string };

@@ -33,11 +33,14 @@ export function recipeColumnLines(recipe: Recipe): RecipeColumnLine[] {
   return [...lines.filter((l) => !l.ignored), ...lines.filter((l) => l.ignored)];
 }
 
-/** How the recipe splits a file: cells, decimal mark, header line ("Not stated" when the file decides). */
-export function recipeFileSettings(recipe: Recipe): { label: string; value: string | null }[] {
+/** What a setting the recipe leaves open says: the import reads it from each file. */
+const FROM_FILE = 'As each file shows';
+
+/** How the recipe splits a file: cells, decimal mark, header line. */
+export function recipeFileSettings(recipe: Recipe): { label: string; value: string }[] {
   return [
-    { label: 'Cells split at', value: recipe.delimiter ? DELIMITERS[recipe.delimiter] : null },
-    { label: 'Decimal mark', value: recipe.decimal ? (recipe.decimal === ',' ? 'Comma' : 'Point') : null },
-    { label: 'Header on line', value: recipe.headerRow === undefined ? null : String(recipe.headerRow + 1) },
+    { label: 'Cells split at', value: recipe.delimiter ? DELIMITERS[recipe.delimiter] : FROM_FILE },
+    { label: 'Decimal mark', value: recipe.decimal ? (recipe.decimal === ',' ? 'Comma' : 'Point') : FROM_FILE },
+    { label: 'Header on line', value: recipe.headerRow === undefined ? FROM_FILE : String(recipe.headerRow + 1) },
   ];
 }

@@ -6,7 +6,7 @@ import { EmailText } from './email-text';
 type DetailItem = {
   label: string;
   value: string | null | undefined;
-  /** An e-mail address: wraps at its "@" and dots, never mid-word. */
+  /** An e-mail address: wraps after its "@", not mid-word. */
   email?: boolean;
 };
 

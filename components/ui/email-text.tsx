@@ -5,31 +5,19 @@ import { AppText } from './app-text';
 type EmailTextProps = Omit<TextProps, 'children'> & { email: string; variant?: 'body' | 'caption'; tone?: 'default' | 'muted' };
 
 /**
- * The points where a long e-mail address may wrap: after the "@" and before each "." (never
- * inside a name). Pure. O(length).
- * @example emailBreakParts('nell.tarrant@example.net') // => ['nell', '.tarrant@', 'example', '.net']
+ * An e-mail address cut where it may wrap: after the "@", so the name and the domain each stay
+ * whole (a part too long for a line alone still wraps where the browser must). Pure. O(length).
+ * @example emailBreakParts('nell.tarrant@example.net') // => ['nell.tarrant@', 'example.net']
  */
 export function emailBreakParts(email: string): string[] {
-  const parts: string[] = [];
-  let current = '';
-  for (const ch of email) {
-    if (ch === '.' && current !== '') {
-      parts.push(current);
-      current = '';
-    }
-    current += ch;
-    if (ch === '@') {
-      parts.push(current);
-      current = '';
-    }
-  }
-  if (current !== '') parts.push(current);
-  return parts;
+  const at = email.lastIndexOf('@');
+  if (at <= 0 || at === email.length - 1) return [email];
+  return [email.slice(0, at + 1), email.slice(at + 1)];
 }
 
 /**
- * An e-mail address that wraps on a narrow screen at its "@" and dots rather than mid-word.
- * On the web the break points are <wbr> elements: nothing is added to the text a user copies.
+ * An e-mail address that wraps on a narrow screen after its "@" rather than mid-word. On the
+ * web the break point is a <wbr> element: nothing is added to the text a user copies.
  */
 export function EmailText({ email, ...rest }: EmailTextProps) {
   if (Platform.OS !== 'web') return <AppText {...rest}>{email}</AppText>;

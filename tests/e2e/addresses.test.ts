@@ -144,7 +144,7 @@ describe('addresses typed by hand', () => {
     await context.close();
   });
 
-  it.each<Role>(['owner', 'fitter', 'player'])('every screen typed by a %s is shown to the roles that may see it and sends the others home', async (role) => {
+  it.each<Role>(['owner', 'fitter', 'player'])('every screen typed by the %s is shown to the roles that may see it and sends the others home', async (role) => {
     const { context, page } = await signedIn(demo.browser, demo.url, role);
     for (const row of rows) {
       try {
@@ -153,6 +153,20 @@ describe('addresses typed by hand', () => {
         throw new Error(`${role} at ${row.path}: ${(error as Error).message}`);
       }
     }
+    await context.close();
+  });
+
+  it('every screen typed by someone signed out leads to the sign-in page, set in Inter with 44 px controls', async () => {
+    const context = await demo.browser.newContext({ viewport: PHONE });
+    const page = await context.newPage();
+    for (const row of rows) {
+      await page.goto(`${demo.url}${row.path}`);
+      await page.waitForURL((u) => u.pathname === '/sign-in', { timeout: 30_000 });
+    }
+    await page.getByRole('button', { name: 'Sign in' }).waitFor();
+    await page.waitForLoadState('networkidle');
+    expect(await textsNotInInter(page)).toEqual([]);
+    expect(await smallControls(page)).toEqual([]);
     await context.close();
   });
 

@@ -26,7 +26,7 @@ export default function RecipeScreen() {
       {query.isError ? <ErrorState error={query.error} onRetry={() => void query.refetch()} /> : null}
       {recipe ? (
         <>
-          <Section title="Name">
+          <Section title="Rename">
             <RecipeRenameForm recipe={recipe} />
           </Section>
           <Section title="What it reads">

@@ -1,4 +1,9 @@
-import { buildName, buildSpecLines, buildSummary, groupBuildsByClub, specNumber } from '@/components/builds/build-summary';
+import { buildName, buildSpecLines as specLines, buildSummary as summary, groupBuildsByClub, NBSP, specNumber } from '@/components/builds/build-summary';
+import type { BuildSpec } from '@/components/builds/build-summary';
+
+/** The texts with no-break spaces written as plain ones (they are checked on their own below). */
+const buildSummary = (spec: Partial<BuildSpec>) => summary(spec)?.split(NBSP).join(' ') ?? null;
+const buildSpecLines = (spec: Partial<BuildSpec>) => specLines(spec).map((l) => l.split(NBSP).join(' '));
 import type { Build } from '@/server/schemas';
 
 // Invented builds (no real heads or shafts).
@@ -50,6 +55,12 @@ describe('buildSummary', () => {
 
   it('buildSummary, a value that starts with its label, is not labelled twice', () => {
     expect(buildSummary({ hoselSetting: 'Hosel 3', grip: 'Grip wrap, midsize' })).toBe('Hosel 3\nGrip wrap, midsize');
+  });
+
+  it('buildSummary, numbers and their units and labels, are joined by no-break spaces (wraps fall between parts)', () => {
+    expect(summary({ loftDeg: 9, lengthIn: 45.5, shaftWeightG: 65, shaftFlex: 'X', swingWeight: 'D2' })).toBe(
+      `Loft${NBSP}9° · Length${NBSP}45.5${NBSP}in\nShaft: 65${NBSP}g · X${NBSP}flex\nSwing${NBSP}weight${NBSP}D2`,
+    );
   });
 
   it('buildSpecLines, only the shaft set, is that one line', () => {

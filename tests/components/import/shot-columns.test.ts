@@ -37,14 +37,14 @@ describe('previewColumns', () => {
       [shot({ ballSpeed: 60, clubSpeed: 42, launchAngle: 12, launchDirection: 1, spinRate: 3000, spinAxis: 2, carry: 200, offline: -3, total: 215 })],
       'metric',
     );
-    expect(cols.map((c) => c.field)).toEqual(['ballSpeed', 'clubSpeed', 'launchAngle', 'launchDirection', 'spinRate', 'spinAxis', 'carry', 'offline', 'total']);
+    expect(cols.map((c) => c.field)).toEqual(['carry', 'offline', 'total', 'launchDirection', 'spinAxis', 'ballSpeed', 'clubSpeed', 'launchAngle', 'spinRate']);
   });
 
   it('previewColumns, shots with carry and spin only, shows just those with display units', () => {
     const cols = previewColumns([shot({ carry: 150 }), shot({ spinRate: 6000 })], 'imperial');
     expect(cols.map((c) => [c.field, c.unit])).toEqual([
-      ['spinRate', 'rpm'],
       ['carry', 'yd'],
+      ['spinRate', 'rpm'],
     ]);
   });
 });
