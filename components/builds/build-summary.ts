@@ -26,7 +26,8 @@ const labelled = (label: string, value: string): string =>
 
 const joinParts = (parts: readonly (string | null)[]): string | null => {
   const kept = parts.filter((p): p is string => Boolean(p));
-  return kept.length > 0 ? kept.join(' · ') : null;
+  // The dot stays at the end of a line when the line wraps.
+  return kept.length > 0 ? kept.join(`${NBSP}· `) : null;
 };
 
 /**

@@ -59,7 +59,7 @@ describe('buildSummary', () => {
 
   it('buildSummary, numbers and their units and labels, are joined by no-break spaces (wraps fall between parts)', () => {
     expect(summary({ loftDeg: 9, lengthIn: 45.5, shaftWeightG: 65, shaftFlex: 'X', swingWeight: 'D2' })).toBe(
-      `Loft${NBSP}9° · Length${NBSP}45.5${NBSP}in\nShaft: 65${NBSP}g · X${NBSP}flex\nSwing${NBSP}weight${NBSP}D2`,
+      `Loft${NBSP}9°${NBSP}· Length${NBSP}45.5${NBSP}in\nShaft: 65${NBSP}g${NBSP}· X${NBSP}flex\nSwing${NBSP}weight${NBSP}D2`,
     );
   });
 
