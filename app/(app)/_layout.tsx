@@ -1,11 +1,10 @@
-import { Redirect, Stack, useRouter } from 'expo-router';
-import { useMemo } from 'react';
+import { Redirect, Stack } from 'expo-router';
 import { guardedScreen } from '@/components/session/route-guard';
 import { useSession } from '@/components/session/session-provider';
 import { ErrorState } from '@/components/ui/error-state';
 import { LoadingState } from '@/components/ui/loading-state';
 import { Screen } from '@/components/ui/screen';
-import { screenColors, stackHeader } from '@/components/ui/stack-options';
+import { headerOptions } from '@/components/ui/stack-options';
 
 export { ErrorBoundary } from 'expo-router';
 
@@ -16,8 +15,6 @@ export { ErrorBoundary } from 'expo-router';
  */
 export default function AppLayout() {
   const session = useSession();
-  const router = useRouter();
-  const header = useMemo(() => stackHeader(() => router.replace('/')), [router]);
   if (session.status === 'loading') return <LoadingState label="Checking your session…" />;
   if (session.status === 'signed-out') return <Redirect href="/sign-in" />;
   if (session.status === 'error') {
@@ -28,7 +25,7 @@ export default function AppLayout() {
     );
   }
   return (
-    <Stack screenOptions={{ ...screenColors, header }} screenLayout={guardedScreen}>
+    <Stack screenOptions={headerOptions} screenLayout={guardedScreen}>
       <Stack.Screen name="(tabs)" options={{ headerShown: false }} />
     </Stack>
   );

@@ -3,7 +3,7 @@ import type { ColorValue } from 'react-native';
 import { canManageTeam, isStaff } from '@/components/session/permissions';
 import { guardedScreen } from '@/components/session/route-guard';
 import { useMe } from '@/components/session/session-provider';
-import { tabHeader } from '@/components/ui/stack-options';
+import { tabHeaderOptions } from '@/components/ui/stack-options';
 import { TabIcon, type TabIconName } from '@/components/ui/tab-icon';
 import { colors, fonts } from '@/components/theme';
 
@@ -22,7 +22,7 @@ export default function TabsLayout() {
     <Tabs
       screenLayout={guardedScreen}
       screenOptions={{
-        header: tabHeader,
+        ...tabHeaderOptions,
         sceneStyle: { backgroundColor: colors.paper },
         tabBarActiveTintColor: colors.accent,
         tabBarInactiveTintColor: colors.textMuted,
