@@ -7,7 +7,7 @@
 import { execSync } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
-import { chromium, type Page } from 'playwright-core';
+import { chromium, type Locator, type Page } from 'playwright-core';
 
 const BASE = process.env.BASE_URL ?? 'http://127.0.0.1:8080';
 const OUT = path.resolve(__dirname, '../.scratch/screenshots');
@@ -26,12 +26,21 @@ async function signIn(page: Page, email: string): Promise<void> {
   await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
 }
 
-async function shot(page: Page, name: string): Promise<void> {
+async function shot(page: Page, name: string, fullPage = false): Promise<void> {
   await page.waitForLoadState('networkidle');
   await page.waitForTimeout(300);
-  await page.screenshot({ path: path.join(OUT, `${name}.png`) });
+  await page.screenshot({ path: path.join(OUT, `${name}.png`), fullPage });
   console.log('  ', name);
 }
+
+/** Scrolls the page's scroll view until the text is in sight, then shoots. */
+async function shotAt(page: Page, name: string, text: string | RegExp | Locator): Promise<void> {
+  const target = typeof text === 'string' || text instanceof RegExp ? page.getByText(text).first() : text;
+  await target.scrollIntoViewIfNeeded();
+  await shot(page, name);
+}
+
+const DEMO_DIR = path.resolve(__dirname, '../fixtures/demo');
 
 async function main(): Promise<void> {
   fs.mkdirSync(OUT, { recursive: true });
@@ -55,6 +64,12 @@ async function main(): Promise<void> {
       await page.getByRole('button', { name: 'Sign in' }).click();
       await page.getByText('do not match').waitFor();
       await shot(page, `${s}-02-sign-in-error`);
+      await page.getByLabel('Password').fill('');
+      await page.getByLabel('E-mail').fill('');
+      await page.getByRole('button', { name: 'Sign in' }).click();
+      await shot(page, `${s}-03-sign-in-emptied`);
+      await page.goto(`${BASE}/no-such-page`);
+      await shot(page, `${s}-04-not-found-signed-out`);
       await context.close();
 
       // fitter
@@ -77,15 +92,60 @@ async function main(): Promise<void> {
       await shot(page, `${s}-14-player-edit-errors`);
       await page.goto(`${BASE}/players/new`);
       await shot(page, `${s}-15-player-new`);
+      const players = (await (await page.request.get(`${BASE}/api/players`)).json()) as { id: string; name: string }[];
+      const nellId = players.find((p) => p.name === 'Nell Tarrant')!.id;
+      await page.goto(`${BASE}/players/${nellId}/account`);
+      await shot(page, `${s}-16-player-has-sign-in`);
       await page.goto(`${BASE}/fittings`);
       await shot(page, `${s}-20-fittings`);
+      await page.getByLabel('Search by player').fill('nell');
+      await page.getByLabel('Sort').selectOption('player-asc');
+      await shot(page, `${s}-20b-fittings-filtered`);
+      await page.getByLabel('Search by player').fill('nobody');
+      await page.getByText('No fitting matches').waitFor();
+      await shot(page, `${s}-20c-fittings-no-match`);
+      await page.goto(`${BASE}/fittings`);
       await page.getByRole('link').filter({ hasText: 'Nell Tarrant' }).first().click();
       await page.waitForURL(/\/fittings\/[0-9a-f-]+$/);
       await shot(page, `${s}-21-fitting`);
-      await page.getByRole('button', { name: 'Edit', exact: true }).click();
+      const fittingUrl = page.url();
+      const buildsHeading = page.getByRole('heading', { name: 'Builds', exact: true });
+      await buildsHeading.waitFor();
+      await shotAt(page, `${s}-21b-fitting-builds`, buildsHeading);
+      await page.getByRole('button', { name: 'Edit', exact: true }).last().click();
       await shot(page, `${s}-22-fitting-edit`);
       await page.goto(`${BASE}/fittings/new`);
       await shot(page, `${s}-23-fitting-new`);
+      await shotAt(page, `${s}-24-fitting-new-conditions`, 'Conditions');
+      // a build's edit page opened by its address alone
+      const fittingId = fittingUrl.split('/').pop()!;
+      const builds = (await (await page.request.get(`${BASE}/api/fittings/${fittingId}/builds`)).json()) as { id: string }[];
+      await page.goto(`${BASE}/builds/${builds[0].id}/edit`);
+      await shot(page, `${s}-25-build-edit-by-address`);
+      // import: a file with no build column and a side column of signed numbers
+      const all = (await (await page.request.get(`${BASE}/api/fittings`)).json()) as { id: string; playerName: string }[];
+      const into = all.find((f) => f.playerName === (s === 'phone' ? 'Nell Tarrant' : 'Bea Solloway'))!.id;
+      await page.goto(`${BASE}/fittings/${into}/import`);
+      const chooser = page.waitForEvent('filechooser');
+      await page.getByRole('button', { name: 'Choose a bay file' }).click();
+      await (await chooser).setFiles(path.join(DEMO_DIR, 'amos-wedge-gapping.csv'));
+      await page.getByLabel('Side [m]: read as').waitFor({ timeout: 30_000 });
+      await shot(page, `${s}-26-import-mapping`);
+      await shotAt(page, `${s}-27-import-sign-question`, 'which way does + point');
+      await shotAt(page, `${s}-28-import-preview`, /The first \d+ of/);
+      if ((await page.getByText('This file is already in the fitting').count()) === 0) {
+        const answer = page.getByRole('radio', { name: '+ is right, − is left' });
+        while ((await answer.count()) > 0) await answer.first().click();
+        await page.getByLabel('Build for rows without one').fill('Own wedges');
+        await page.getByRole('button', { name: 'Import the bay file', disabled: false }).waitFor({ timeout: 30_000 });
+        await page.getByRole('button', { name: 'Import the bay file' }).click();
+        await page.getByText(/shots imported/).waitFor({ timeout: 30_000 });
+        await shot(page, `${s}-29-import-result`);
+        await page.goto(`${BASE}/fittings/${into}`);
+        const ladder = page.getByRole('heading', { name: 'Ladder', exact: true });
+        await ladder.waitFor({ timeout: 30_000 });
+        await shotAt(page, `${s}-29b-fitting-ladder`, ladder);
+      }
       await page.goto(`${BASE}/account`);
       await shot(page, `${s}-30-account-fitter`);
       await context.close();
@@ -96,8 +156,25 @@ async function main(): Promise<void> {
       await signIn(page, 'hedda@larchmere.example');
       await page.goto(`${BASE}/team`);
       await shot(page, `${s}-40-team`);
+      await page.getByRole('button', { name: /^Deactivate / }).first().click();
+      await shot(page, `${s}-40b-team-deactivate-question`);
+      await page.getByRole('button', { name: 'Cancel' }).click();
       await page.goto(`${BASE}/team/new`);
       await shot(page, `${s}-41-team-new`);
+      await page.request.post(`${BASE}/api/recipes`, {
+        headers: { 'x-ovalyard-request': '1' },
+        data: {
+          name: `Bay 2 export (${s})`,
+          recipe: { columns: { Club: { field: 'club' }, 'Carry [m]': { field: 'carry', unit: 'm' }, 'Side [m]': { field: 'offline', unit: 'm', side: 'signed-right-positive' }, Notes: { field: 'ignore' } } },
+        },
+      });
+      await page.goto(`${BASE}/team`);
+      await page.getByRole('button', { name: 'Import recipes' }).click();
+      await page.waitForURL(/\/recipes$/);
+      await shot(page, `${s}-42-recipes`);
+      await page.getByRole('link', { name: `Recipe Bay 2 export (${s})` }).click();
+      await page.waitForURL(/\/recipes\/[0-9a-f-]+$/);
+      await shot(page, `${s}-43-recipe`, true);
       await context.close();
 
       // player
@@ -107,6 +184,11 @@ async function main(): Promise<void> {
       await shot(page, `${s}-50-my-fittings`);
       await page.goto(`${BASE}/account`);
       await shot(page, `${s}-51-account-player`);
+      await page.goto(`${BASE}/players`);
+      await page.waitForURL(/\/my-fittings$/);
+      await shot(page, `${s}-52-player-typed-players`);
+      await page.goto(`${BASE}/nothing-here`);
+      await shot(page, `${s}-53-not-found`);
       await context.close();
     }
   } finally {

@@ -12,6 +12,7 @@ import { authRouter } from './routes/auth';
 import { bagsRouter } from './routes/bags';
 import { bayFilesRouter } from './routes/bay-files';
 import { chosenBuildsRouter } from './routes/chosen-builds';
+import { demoRouter } from './routes/demo';
 import { fittingsRouter } from './routes/fittings';
 import { healthRouter } from './routes/health';
 import { playersRouter } from './routes/players';
@@ -65,6 +66,7 @@ export function createApp({ sequelize, config, mailer, serveWeb = false, log, co
   });
   api.use('/health', healthRouter(sequelize));
   const mail = mailer ?? createMailer(config.mail.smtpUrl, config.mail.from);
+  api.use('/demo', demoRouter());
   api.use(authRouter(config, mail));
   // Everything below needs a signed-in user; each service checks role and shop again.
   api.use(['/players', '/fittings', '/team', '/recipes', '/bay-files', '/shots', '/builds', '/bag-clubs', '/spec-sheets', '/workshop-settings'], authenticate(config));

@@ -1,15 +1,16 @@
 import { Redirect, Stack } from 'expo-router';
+import { guardedScreen } from '@/components/session/route-guard';
 import { useSession } from '@/components/session/session-provider';
 import { ErrorState } from '@/components/ui/error-state';
 import { LoadingState } from '@/components/ui/loading-state';
 import { Screen } from '@/components/ui/screen';
-import { HeaderHomeButton } from '@/components/ui/header-home-button';
 import { headerOptions } from '@/components/ui/stack-options';
 
 export { ErrorBoundary } from 'expo-router';
 
 /**
- * Signed-in part of the app. GET /api/me decides: no session → sign-in. The guard is a
+ * Signed-in part of the app. GET /api/me decides: no session → sign-in; a page the role may not
+ * open (components/session/route-access.ts) → the role's start page, from inside the Stack. The guards are a
  * convenience; the server authorises every request again.
  */
 export default function AppLayout() {
@@ -24,14 +25,7 @@ export default function AppLayout() {
     );
   }
   return (
-    <Stack
-      screenOptions={({ navigation }) => ({
-        ...headerOptions,
-        headerBackTitle: 'Back',
-        // A page opened by its address has no history: offer the way to the start page instead.
-        ...(navigation.canGoBack() ? {} : { headerLeft: () => <HeaderHomeButton /> }),
-      })}
-    >
+    <Stack screenOptions={headerOptions} screenLayout={guardedScreen}>
       <Stack.Screen name="(tabs)" options={{ headerShown: false }} />
     </Stack>
   );

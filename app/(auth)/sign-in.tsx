@@ -1,13 +1,15 @@
 import { Stack, useRouter } from 'expo-router';
+import { useDemoLoaded } from '@/components/queries/demo';
 import { SignInForm } from '@/components/session/sign-in-form';
 import { SignInFrame } from '@/components/session/sign-in-frame';
 
 export default function SignInScreen() {
   const router = useRouter();
+  const demo = useDemoLoaded();
   return (
     <SignInFrame>
       <Stack.Screen options={{ title: 'Sign in · Ovalyard' }} />
-      <SignInForm onSignedIn={() => router.replace('/')} />
+      <SignInForm demo={demo} onSignedIn={() => router.replace('/')} />
     </SignInFrame>
   );
 }

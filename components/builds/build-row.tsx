@@ -40,7 +40,7 @@ export function BuildRow({ build, clubLabel, canEdit }: BuildRowProps) {
           accessibilityLabel={`Edit the specs of ${clubLabel}, ${name}`}
           variant="secondary"
           compact
-          onPress={() => router.push({ pathname: '/builds/[id]/edit', params: { id: build.id, fittingId: build.fittingId } })}
+          onPress={() => router.push({ pathname: '/builds/[id]/edit', params: { id: build.id } })}
         />
       ) : null}
     </View>

@@ -12,7 +12,7 @@ export type { LegendItem } from './chart-legend';
 
 export { ovalPlotGeometry, ovalPlotSummary, ovalHalfExtents, buildKey, buildName } from './oval-plot-geometry';
 export type { OvalGroup, OvalPlotGeometry, OvalPlotInput } from './oval-plot-geometry';
-export { ladderChartGeometry, gapFlagWord, shortClubLabel, GAP_FLAG_WORDS, LOFT_FLAG_WORDS } from './ladder-chart-geometry';
+export { ladderChartGeometry, gapFlagWord, ladderClubLabel, GAP_FLAG_WORDS, LOFT_FLAG_WORDS } from './ladder-chart-geometry';
 export type { LadderGeometry } from './ladder-chart-geometry';
 export { launchWindowGeometry, insidePolygon } from './launch-window-plot-geometry';
 export type { LaunchWindowGeometry } from './launch-window-plot-geometry';

@@ -57,7 +57,7 @@ export type LadderGeometry = {
 };
 
 export const LADDER_ROW_PX = 44;
-export const LADDER_MARGIN = { top: 8, bottom: 36, labelColumn: 64, gapColumn: 104, right: 4 } as const;
+export const LADDER_MARGIN = { top: 8, bottom: 36, labelColumn: 64, gapColumn: 112, right: 4 } as const;
 
 /** The word that goes with a carry-gap flag, so a flag is never told by colour alone. */
 export const GAP_FLAG_WORDS: Readonly<Record<Exclude<GapFlag, null>, string>> = {
@@ -78,14 +78,22 @@ export function gapFlagWord(flag: GapFlag): string | null {
 }
 
 /**
- * A club's short name for a chart row: "Driver", "3 wood", "4 hybrid", "7 iron", "PW", "56°". O(1).
- * @example shortClubLabel('W56') // => '56°'
+ * A club's full name for a chart row: "Driver", "3 wood", "7 iron", "Pitching wedge", "56° wedge"
+ * (an unknown code as written). O(1).
+ * @example ladderClubLabel('PW') // => 'Pitching wedge'
  */
-export function shortClubLabel(code: string): string {
-  const info = clubInfo(code);
-  if (!info) return code;
-  if (info.kind !== 'wedge') return info.label;
-  return /^W\d\d$/.test(code) ? `${code.slice(1)}°` : code;
+export function ladderClubLabel(code: string): string {
+  return clubInfo(code)?.label ?? code;
+}
+
+/** Width per character of the 13 px row labels, a little over Inter's average (px). */
+const LABEL_CHAR_PX = 7;
+
+/** The label column: wide enough for the longest club name of the ladder (at least the margin's). */
+function labelColumnPx(labels: readonly string[]): number {
+  let chars = 0;
+  for (const l of labels) chars = Math.max(chars, l.length);
+  return Math.max(LADDER_MARGIN.labelColumn, Math.ceil(chars * LABEL_CHAR_PX) + 10);
 }
 
 /**
@@ -101,10 +109,12 @@ export function ladderChartGeometry(input: LadderChartInput): LadderGeometry {
   const unit = distanceUnit(input.units);
   const d = (m: number) => fromCanonical(m, unit, 'carry');
   const m = LADDER_MARGIN;
+  const labels = input.rungs.map((r) => ladderClubLabel(r.club));
+  const labelColumn = labelColumnPx(labels);
   const plot: PlotBox = {
-    left: m.labelColumn,
+    left: labelColumn,
     top: m.top,
-    right: Math.max(m.labelColumn + 40, input.widthPx - m.gapColumn - m.right),
+    right: Math.max(labelColumn + 40, input.widthPx - m.gapColumn - m.right),
     bottom: m.top + Math.max(1, input.rungs.length) * LADDER_ROW_PX,
   };
   let lo = Infinity;
@@ -131,7 +141,7 @@ export function ladderChartGeometry(input: LadderChartInput): LadderGeometry {
   const rowY = (i: number) => plot.top + (i + 0.5) * LADDER_ROW_PX;
   const rows: LadderRow[] = input.rungs.map((r, i) => ({
     club: r.club,
-    label: shortClubLabel(r.club),
+    label: labels[i],
     y: rowY(i),
     medianX: x(d(r.carryMedianM)),
     q1X: x(d(r.carryQ1M)),

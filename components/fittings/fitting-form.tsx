@@ -4,11 +4,12 @@ import { errorMessage } from '../api-client';
 import { AppText } from '../ui/app-text';
 import { Button } from '../ui/button';
 import { ChoiceField } from '../ui/choice-field';
+import { DateField } from '../ui/date-field';
 import { FormRow } from '../ui/form-row';
 import { Notice } from '../ui/notice';
 import { SwitchField } from '../ui/switch-field';
 import { TextField } from '../ui/text-field';
-import { space } from '../theme';
+import { colors, radius, space } from '../theme';
 import { fittingFormText, parseFittingForm, type FittingFormText } from './fitting-form-values';
 import { PlayerPicker } from './player-picker';
 import { useTextForm } from '../use-text-form';
@@ -52,34 +53,39 @@ export function FittingForm({ fitting, playerId, submitTitle, busy, error, onSub
       ) : (
         <PlayerPicker playerId={text.playerId} onChange={set('playerId')} error={shown.playerId} />
       )}
-      <FormRow>
-        <TextField label="Date" value={text.date} onChangeText={set('date')} error={shown.date} placeholder="YYYY-MM-DD" hint="As YYYY-MM-DD" />
-        <TextField label="Ball" value={text.ball} onChangeText={set('ball')} error={shown.ball} placeholder="Model used in the bay" />
+      <FormRow basisPx={240}>
+        <DateField label="Date" value={text.date} onChange={set('date')} error={shown.date} />
+        <ChoiceField label="Venue" value={text.venue} options={VENUES} onChange={set('venue')} />
       </FormRow>
-      <ChoiceField label="Venue" value={text.venue} options={VENUES} onChange={set('venue')} />
-      <AppText variant="label" tone="muted">
-        Conditions (optional; used later to normalise carry)
-      </AppText>
-      <FormRow>
-        <TextField
-          label="Temperature"
-          suffix="°C"
-          value={text.temperatureC}
-          onChangeText={set('temperatureC')}
-          error={shown.temperatureC}
-          inputMode="decimal"
-        />
-        <TextField label="Altitude" suffix="m" value={text.altitudeM} onChangeText={set('altitudeM')} error={shown.altitudeM} inputMode="decimal" />
-        <TextField
-          label="Humidity"
-          suffix="%"
-          value={text.humidityPct}
-          onChangeText={set('humidityPct')}
-          error={shown.humidityPct}
-          inputMode="decimal"
-        />
-      </FormRow>
-      <ChoiceField label="Ground" value={text.groundFirmness} options={FIRMNESS} onChange={set('groundFirmness')} />
+      <TextField label="Ball" value={text.ball} onChangeText={set('ball')} error={shown.ball} placeholder="The ball model hit in the bay" />
+      <View style={styles.group} accessibilityRole={'group' as never} accessibilityLabel="Conditions">
+        <View style={styles.groupHead}>
+          <AppText variant="bodyStrong">Conditions</AppText>
+          <AppText variant="caption" tone="muted">
+            Optional. Where the shots were hit; used to carry them over to the player's own course.
+          </AppText>
+        </View>
+        <FormRow basisPx={96}>
+          <TextField
+            label="Temperature"
+            suffix="°C"
+            value={text.temperatureC}
+            onChangeText={set('temperatureC')}
+            error={shown.temperatureC}
+            inputMode="decimal"
+          />
+          <TextField label="Altitude" suffix="m" value={text.altitudeM} onChangeText={set('altitudeM')} error={shown.altitudeM} inputMode="decimal" />
+          <TextField
+            label="Humidity"
+            suffix="%"
+            value={text.humidityPct}
+            onChangeText={set('humidityPct')}
+            error={shown.humidityPct}
+            inputMode="decimal"
+          />
+        </FormRow>
+        <ChoiceField label="Ground" value={text.groundFirmness} options={FIRMNESS} onChange={set('groundFirmness')} />
+      </View>
       <TextField label="Notes" value={text.notes} onChangeText={set('notes')} error={shown.notes} multiline numberOfLines={4} />
       <SwitchField
         label="Remote fitting"
@@ -98,5 +104,7 @@ export function FittingForm({ fitting, playerId, submitTitle, busy, error, onSub
 const styles = StyleSheet.create({
   form: { gap: space.lg },
   fixed: { gap: space.xs },
+  group: { gap: space.md, padding: space.md, borderRadius: radius.lg, borderWidth: 1, borderColor: colors.border, backgroundColor: colors.surface },
+  groupHead: { gap: 2 },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
 });

@@ -16,7 +16,7 @@ type FittingListProps = {
   showPlayer?: boolean;
 };
 
-/** Fittings, newest first as the server sends them, with loading, error and empty states. */
+/** Fittings in the order the server sends them (newest first unless sorted), with loading, error and empty states. */
 export function FittingList({ filters, emptyTitle, emptyMessage, emptyAction, showPlayer = true }: FittingListProps) {
   const router = useRouter();
   const query = useFittingsQuery(filters);

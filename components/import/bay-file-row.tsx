@@ -7,7 +7,7 @@ import { useDeleteBayFileMutation } from '../queries/bay-files';
 import { space } from '../theme';
 import { AppText } from '../ui/app-text';
 import { Button } from '../ui/button';
-import { ConfirmStep } from './confirm-step';
+import { ConfirmStep } from '../ui/confirm-step';
 import { deleteBayFileQuestion } from './import-words';
 
 type BayFileRowProps = {

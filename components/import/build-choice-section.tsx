@@ -1,4 +1,5 @@
 import { StyleSheet, View } from 'react-native';
+import { clubInfo } from '@/analysis/clubs';
 import { space } from '../theme';
 import { AppText } from '../ui/app-text';
 import { ChoiceField } from '../ui/choice-field';
@@ -26,7 +27,7 @@ export function BuildChoiceSection({ value, onChange, clubs, hasBuildColumn }: B
           <AppText tone="muted">
             {hasBuildColumn
               ? 'Each shot takes the build its row names.'
-              : 'No column is read as the build. Set a column to "Build" above, or choose another way.'}
+              : 'No column is read as the build. Set a column to “Build” above, or choose another way.'}
           </AppText>
           <TextField
             label="Build for rows without one"
@@ -53,7 +54,7 @@ export function BuildChoiceSection({ value, onChange, clubs, hasBuildColumn }: B
           {clubs.map((club) => (
             <TextField
               key={club}
-              label={`Build for ${club}`}
+              label={`Build for ${clubInfo(club)?.label ?? club}`}
               value={value.byClub[club] ?? ''}
               onChangeText={(text) => set({ byClub: { ...value.byClub, [club]: text } })}
               placeholder="Leave blank for none"

@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import { colors, radius, space } from '../theme';
+import { colors, fonts, radius, space } from '../theme';
 import { AppText } from '../ui/app-text';
 import { confidenceLevel } from './recipe-edit';
 
@@ -7,6 +7,8 @@ type ConfidenceBadgeProps = {
   confidence: number;
   /** Who chose this reading instead of the suggestion ("Your choice", "As stored"); shown instead. */
   chosenBy?: string;
+  /** Draw `chosenBy` in the caution colours (a question the fitter has to answer). */
+  attention?: boolean;
 };
 
 const LOOK = {
@@ -16,11 +18,13 @@ const LOOK = {
 } as const;
 
 /** How sure the automatic mapping of a column is; a low one stands out. Who chose it, once not the suggestion. */
-export function ConfidenceBadge({ confidence, chosenBy }: ConfidenceBadgeProps) {
-  const look = chosenBy ? { text: chosenBy, bg: colors.accentSoft, fg: colors.ink } : LOOK[confidenceLevel(confidence)];
+export function ConfidenceBadge({ confidence, chosenBy, attention = false }: ConfidenceBadgeProps) {
+  const look = chosenBy
+    ? { text: chosenBy, bg: attention ? colors.cautionSoft : colors.accentSoft, fg: attention ? colors.caution : colors.ink }
+    : LOOK[confidenceLevel(confidence)];
   return (
     <View style={[styles.badge, { backgroundColor: look.bg }]} accessibilityLabel={`${look.text} (${Math.round(confidence * 100)} %)`}>
-      <AppText variant="caption" style={{ color: look.fg, fontFamily: 'Inter_600SemiBold' }}>
+      <AppText variant="caption" style={{ color: look.fg, fontFamily: fonts.semibold }}>
         {look.text}
       </AppText>
     </View>

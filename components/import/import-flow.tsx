@@ -38,6 +38,7 @@ export function ImportFlow({ fittingId, units, canUseRecipes, onDone }: ImportFl
     noPreview: 'Choose a file first.',
     duplicate: shown?.duplicateOf != null,
     buildsComplete: session.buildsComplete,
+    openQuestions: session.signQuestions.length,
     previewFailed: session.preview.isError,
     previewBehind: session.previewBehind,
     shotCount,

@@ -1,4 +1,5 @@
 import { StyleSheet, View } from 'react-native';
+import { clubInfo } from '@/analysis/clubs';
 import type { BayFile } from '@/server/schemas';
 import { plural } from '../format';
 import { space } from '../theme';
@@ -22,14 +23,22 @@ type ImportResultProps = {
 /** What the stored import (or re-map) did: shots imported, rows rejected with reasons, lines skipped. */
 export function ImportResult({ bayFile, title, note, onDone, another }: ImportResultProps) {
   const { report } = bayFile;
-  const groups = report.groups.map((g) => `${g.club}${g.build ? ` · ${g.build}` : ''}: ${g.n}`);
+  const groups = report.groups.map((g) => `${clubInfo(g.club)?.label ?? g.club}${g.build ? ` · ${g.build}` : ''}: ${plural(g.n, 'shot')}`);
   return (
     <Section title={title}>
       <Notice tone="success" title={`${plural(bayFile.shotCount, 'shot')} imported`}>
         <AppText>{`From "${bayFile.fileName}": ${plural(report.rows, 'row')} read, ${plural(report.rejected.length, 'row')} not imported.`}</AppText>
         {note ? <AppText>{note}</AppText> : null}
       </Notice>
-      {groups.length ? <AppText tone="muted">{groups.join('   ')}</AppText> : null}
+      {groups.length ? (
+        <View style={styles.groups}>
+          {groups.map((g, i) => (
+            <AppText key={i} tone="muted">
+              {g}
+            </AppText>
+          ))}
+        </View>
+      ) : null}
       <RejectedRows report={report} />
       <View style={styles.actions}>
         <Button title="Back to the fitting" onPress={onDone} />
@@ -39,4 +48,4 @@ export function ImportResult({ bayFile, title, note, onDone, another }: ImportRe
   );
 }
 
-const styles = StyleSheet.create({ actions: { gap: space.sm } });
+const styles = StyleSheet.create({ actions: { gap: space.sm }, groups: { gap: 2 } });

@@ -2,10 +2,17 @@ import { StyleSheet, View } from 'react-native';
 import type { ColumnSuggestion, ColumnTarget, RecipeColumn, SideNotation } from '@/analysis/import';
 import { colors, radius, space } from '../theme';
 import { AppText } from '../ui/app-text';
+import { ChoiceField } from '../ui/choice-field';
 import { SelectField } from '../ui/select-field';
 import type { ColumnNote } from './column-note';
 import { ConfidenceBadge } from './confidence-badge';
 import { isSideTarget, SIDE_OPTIONS, TARGET_OPTIONS, unitName, unitOptionsFor } from './recipe-edit';
+
+/** The answers to an open sign question: the two signed conventions, in the trade's words. */
+const SIGN_ANSWERS: readonly { value: SideNotation; label: string }[] = [
+  { value: 'signed-right-positive', label: '+ is right, − is left' },
+  { value: 'signed-left-positive', label: '+ is left, − is right' },
+];
 
 type MappingColumnRowProps = {
   suggestion: ColumnSuggestion;
@@ -20,18 +27,19 @@ type MappingColumnRowProps = {
 /** One column of the file: its header and samples as written, and what Ovalyard reads it as. */
 export function MappingColumnRow({ suggestion, column, note, onField, onUnit, onSide }: MappingColumnRowProps) {
   const header = suggestion.header;
-  const low = note.attention;
+  // A doubtful reading of the column stands out; an open sign question is asked below instead.
+  const low = note.attention && !note.question;
   const units = unitOptionsFor(column.field);
   const unit = unitName(column.unit) ?? '';
   const unitChoices = unit || units.length === 0 ? units : [{ value: '', label: `Choose (file says "${column.unit ?? '?'}")` }, ...units];
   const ignored = column.field === 'ignore';
   return (
-    <View style={[styles.row, low && styles.low, ignored && styles.ignored]} accessibilityLabel={`Column ${header}`}>
+    <View style={[styles.row, (low || note.question) && styles.low, ignored && styles.ignored]} accessibilityLabel={`Column ${header}`}>
       <View style={styles.head}>
         <AppText variant="bodyStrong" style={styles.header} numberOfLines={2}>
           {header}
         </AppText>
-        <ConfidenceBadge confidence={suggestion.confidence} chosenBy={note.badge} />
+        <ConfidenceBadge confidence={suggestion.confidence} chosenBy={note.badge} attention={note.question} />
       </View>
       <AppText variant="caption" tone="muted" numberOfLines={1}>
         {suggestion.samples.length ? suggestion.samples.join('  ·  ') : 'No values in the first rows'}
@@ -45,7 +53,7 @@ export function MappingColumnRow({ suggestion, column, note, onField, onUnit, on
             <SelectField label={`${header}: unit`} hideLabel value={unit} options={unitChoices} onChange={(u) => u && onUnit(u)} attention={!unit} />
           </View>
         ) : null}
-        {isSideTarget(column.field) ? (
+        {isSideTarget(column.field) && !note.question ? (
           <View style={styles.small}>
             <SelectField
               label={`${header}: left and right`}
@@ -60,6 +68,16 @@ export function MappingColumnRow({ suggestion, column, note, onField, onUnit, on
       <AppText variant="caption" tone={low ? 'default' : 'muted'}>
         {note.text}
       </AppText>
+      {note.question ? (
+        <View style={styles.question}>
+          <ChoiceField<SideNotation | ''>
+            label={`In “${header}”, which way does + point?`}
+            value=""
+            options={SIGN_ANSWERS}
+            onChange={(side) => side && onSide(side)}
+          />
+        </View>
+      ) : null}
     </View>
   );
 }
@@ -80,4 +98,5 @@ const styles = StyleSheet.create({
   controls: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, marginTop: space.xs },
   target: { flexGrow: 2, flexBasis: 160, minWidth: 0, maxWidth: 420 },
   small: { flexGrow: 1, flexBasis: 110, minWidth: 0, maxWidth: 240 },
+  question: { marginTop: space.xs, padding: space.sm, borderRadius: radius.md, backgroundColor: colors.cautionSoft },
 });

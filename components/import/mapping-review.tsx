@@ -48,7 +48,14 @@ export function MappingReview({ session, units, hasFile, showDuplicate, base, fr
       {shown ? (
         <>
           <ImportWarnings preview={shown} showDuplicate={showDuplicate} />
-          <MappingStep session={session} preview={shown} base={base} fromRecipe={fromRecipe} />
+          <MappingStep
+            session={session}
+            preview={shown}
+            base={base}
+            fromRecipe={fromRecipe}
+            hasBuildColumn={hasBuildColumn}
+            buildsFromColumn={session.builds.mode === 'column'}
+          />
           <BuildChoiceSection
             value={session.builds}
             onChange={session.setBuilds}

@@ -8,7 +8,7 @@ import { ErrorState } from '../ui/error-state';
 import { SelectField } from '../ui/select-field';
 import { Section } from '../ui/section';
 import { TextField } from '../ui/text-field';
-import { ConfirmStep } from './confirm-step';
+import { ConfirmStep } from '../ui/confirm-step';
 import { deleteRecipeQuestion } from './import-words';
 
 type RecipeChoiceSectionProps = {

@@ -39,6 +39,7 @@ export function RemapFlow({ bayFile, units, onDone }: RemapFlowProps) {
     noPreview: 'Reading the stored file…',
     duplicate: false,
     buildsComplete: session.buildsComplete,
+    openQuestions: session.signQuestions.length,
     previewFailed: session.preview.isError,
     previewBehind: session.previewBehind,
     shotCount,

@@ -4,7 +4,8 @@ import type { ImportOptions } from '@/server/schemas';
 import { useBayFilePreviewQuery, type BayFilePreview } from '../queries/bay-files';
 import { useDebouncedValue } from '../use-debounced-value';
 import { buildAssignmentFor, INITIAL_BUILD_CHOICE, type BuildChoice } from './build-choice';
-import { recipeWithOverrides, setColumnField, setColumnSide, setColumnUnit } from './recipe-edit';
+import { effectiveColumn, recipeWithOverrides, setColumnField, setColumnSide, setColumnUnit } from './recipe-edit';
+import { openSignQuestions } from './sign-questions';
 import type { UploadFile } from './upload-request';
 
 /** Wait after the last edit before the preview runs again. */
@@ -54,6 +55,18 @@ export function useMappingSession({ fittingId, file, base, recipeId, initialBuil
     setOverrides((o) => setColumnSide(o, header, current, side));
   }, []);
   const resetMapping = useCallback(() => setOverrides({}), []);
+  const signQuestions = shown
+    ? openSignQuestions({
+        ambiguous: shown.ambiguous,
+        fieldOf: (header) => {
+          const suggestion = shown.suggestions.find((s) => s.header === header);
+          return suggestion ? effectiveColumn(header, overrides, shown.recipe, suggestion).field : 'ignore';
+        },
+        overrides,
+        base,
+        fromRecipe: Boolean(recipeId),
+      })
+    : [];
 
   return {
     overrides,
@@ -69,6 +82,8 @@ export function useMappingSession({ fittingId, file, base, recipeId, initialBuil
     preview,
     /** The preview to show: the current one, or the last good one of this file. */
     shown,
+    /** Left/right columns whose sign the fitter has still to answer (headers). */
+    signQuestions,
     /** Whether the preview on screen is for older choices than those on screen. */
     previewBehind: options !== settledOptions || preview.isPlaceholderData || preview.isFetching,
   };

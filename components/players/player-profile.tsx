@@ -11,7 +11,7 @@ export function PlayerProfile({ player }: PlayerProfileProps) {
     <Card>
       <DetailList
         items={[
-          { label: 'E-mail', value: player.email },
+          { label: 'E-mail', value: player.email, email: true },
           { label: 'Plays', value: formatHandedness(player.handedness) },
           { label: 'Handicap index', value: player.handicap === null ? null : formatHandicap(player.handicap) },
           { label: 'Height', value: player.heightCm === null ? null : `${player.heightCm} cm` },

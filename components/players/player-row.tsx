@@ -11,15 +11,26 @@ type PlayerRowProps = { player: Player; onPress: () => void };
 export function PlayerRow({ player, onPress }: PlayerRowProps) {
   const fittings = player.fittingCount ?? 0;
   return (
-    <Card onPress={onPress} accessibilityLabel={`${player.name}, handicap ${formatHandicap(player.handicap)}`}>
+    <Card onPress={onPress} accessibilityLabel={`${player.name}, ${player.handicap === null ? 'no handicap' : `handicap ${formatHandicap(player.handicap)}`}`}>
       <View style={styles.top}>
         <AppText variant="bodyStrong" style={styles.name} numberOfLines={1}>
           {player.name}
         </AppText>
         <View style={styles.badge}>
-          <AppText variant="label" style={styles.badgeText}>
-            {formatHandicap(player.handicap)}
-          </AppText>
+          {player.handicap === null ? (
+            <AppText variant="caption" style={styles.badgeText}>
+              No handicap
+            </AppText>
+          ) : (
+            <>
+              <AppText variant="caption" style={styles.badgeText}>
+                Handicap
+              </AppText>
+              <AppText variant="label" style={styles.badgeText}>
+                {formatHandicap(player.handicap)}
+              </AppText>
+            </>
+          )}
         </View>
       </View>
       <AppText variant="caption" tone="muted">
@@ -33,6 +44,6 @@ export function PlayerRow({ player, onPress }: PlayerRowProps) {
 const styles = StyleSheet.create({
   top: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between', gap: space.md },
   name: { flexShrink: 1 },
-  badge: { backgroundColor: colors.accentSoft, borderRadius: radius.pill, paddingHorizontal: space.md, paddingVertical: 2 },
+  badge: { flexDirection: 'row', alignItems: 'baseline', gap: space.xs, backgroundColor: colors.accentSoft, borderRadius: radius.pill, paddingHorizontal: space.md, paddingVertical: 2 },
   badgeText: { color: colors.ink },
 });

@@ -1,6 +1,6 @@
 import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { Shot } from '@/analysis/fields';
-import type { ColumnSuggestion, Recipe, SniffResult } from '@/analysis/import';
+import type { AmbiguousColumn, ColumnSuggestion, Recipe, SniffResult } from '@/analysis/import';
 import type { BayFile, BuildAssignment, ImportOptions, ImportReport } from '@/server/schemas';
 import { apiRequest, api } from '../api-client';
 import { downloadText } from '../import/text-request';
@@ -16,6 +16,8 @@ export type BayFilePreview = {
   sniff: SniffResult;
   recipe: Recipe;
   suggestions: ColumnSuggestion[];
+  /** The suggestion's guesses to confirm (kind 'sign': a left/right column whose sign the file does not state). */
+  ambiguous: AmbiguousColumn[];
   report: ImportReport;
   /** The first 25 shots, canonical units. */
   shots: Shot[];

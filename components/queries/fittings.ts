@@ -9,7 +9,8 @@ export const fittingKeys = {
   detail: (id: string) => [...fittingKeys.all, 'detail', id] as const,
 };
 
-export const getFittings = (f: FittingFilters) => api.get<Fitting[]>('/fittings', { playerId: f.playerId });
+export const getFittings = (f: FittingFilters) =>
+  api.get<Fitting[]>('/fittings', { playerId: f.playerId, q: f.q?.trim() || undefined, from: f.from, to: f.to, sort: f.sort });
 export const getFitting = (id: string) => api.get<Fitting>(`/fittings/${encodeURIComponent(id)}`);
 
 export const fittingsQuery = (f: FittingFilters) =>

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { signInBodySchema } from '@/server/schemas';
 import { ApiError, errorMessage } from '../api-client';
@@ -9,22 +9,41 @@ import { Notice } from '../ui/notice';
 import { TextField } from '../ui/text-field';
 import { space } from '../theme';
 import { AuthLink } from './auth-link';
-import { DemoHint } from './demo-hint';
+import { DEMO_SIGN_IN, DemoHint } from './demo-hint';
 import { useSignInMutation } from './use-sign-in';
 
-type SignInFormProps = { onSignedIn: () => void };
+type SignInFormProps = {
+  onSignedIn: () => void;
+  /** The server has the invented demo loaded: show its sign-ins and pre-fill the fitter's. */
+  demo?: boolean;
+};
 
 function bannerFor(error: unknown): string {
   if (error instanceof ApiError && error.code === 'BAD_CREDENTIALS') return 'That e-mail and password do not match. Check both and try again.';
   return errorMessage(error);
 }
 
-/** E-mail and password; errors show in the page. */
-export function SignInForm({ onSignedIn }: SignInFormProps) {
+/**
+ * E-mail and password; errors show in the page. Editing a field after a refusal takes the old
+ * refusal away (it spoke of what was typed before).
+ */
+export function SignInForm({ onSignedIn, demo = false }: SignInFormProps) {
   const [email, setEmail] = useState('');
   const [password, setPassword] = useState('');
   const [fieldErrors, setFieldErrors] = useState<FieldErrors>({});
   const signIn = useSignInMutation();
+
+  // The demo answer comes after the first paint: fill in only what nobody has typed into yet.
+  useEffect(() => {
+    if (!demo) return;
+    setEmail((e) => e || DEMO_SIGN_IN.email);
+    setPassword((p) => p || DEMO_SIGN_IN.password);
+  }, [demo]);
+
+  const edit = (set: (value: string) => void) => (value: string) => {
+    set(value);
+    if (signIn.error) signIn.reset();
+  };
 
   const submit = () => {
     const parsed = signInBodySchema.safeParse({ email, password });
@@ -45,7 +64,7 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
       <TextField
         label="E-mail"
         value={email}
-        onChangeText={setEmail}
+        onChangeText={edit(setEmail)}
         error={fieldErrors.email}
         autoCapitalize="none"
         autoComplete="email"
@@ -56,7 +75,7 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
       <TextField
         label="Password"
         value={password}
-        onChangeText={setPassword}
+        onChangeText={edit(setPassword)}
         error={fieldErrors.password}
         secureTextEntry
         autoComplete="current-password"
@@ -65,7 +84,7 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
       />
       <Button title="Sign in" onPress={submit} busy={signIn.isPending} />
       <AuthLink href="/forgot">Forgot your password?</AuthLink>
-      <DemoHint />
+      {demo ? <DemoHint /> : null}
     </View>
   );
 }

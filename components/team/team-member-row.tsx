@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { TeamMember } from '@/server/schemas';
 import { errorMessage } from '../api-client';
@@ -6,14 +7,21 @@ import { useUpdateTeamMemberMutation } from '../queries/team';
 import { AppText } from '../ui/app-text';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
+import { ConfirmStep } from '../ui/confirm-step';
+import { EmailText } from '../ui/email-text';
 import { colors, radius, space } from '../theme';
 
 type TeamMemberRowProps = { member: TeamMember; isSelf: boolean };
 
-/** A member of the shop; an owner can deactivate or reactivate a fitter. */
+/**
+ * A member of the shop; an owner can deactivate a fitter (after a question in the page: their
+ * sessions end and they can no longer sign in) or reactivate one (at once).
+ */
 export function TeamMemberRow({ member, isSelf }: TeamMemberRowProps) {
   const update = useUpdateTeamMemberMutation();
+  const [confirming, setConfirming] = useState(false);
   const canToggle = member.role === 'fitter' && !isSelf;
+  const setActive = (active: boolean) => update.mutate({ id: member.id, active }, { onSuccess: () => setConfirming(false) });
   return (
     <Card>
       <View style={styles.top}>
@@ -22,9 +30,7 @@ export function TeamMemberRow({ member, isSelf }: TeamMemberRowProps) {
             {member.name}
             {isSelf ? ' (you)' : ''}
           </AppText>
-          <AppText variant="caption" tone="muted" numberOfLines={1}>
-            {member.email}
-          </AppText>
+          <EmailText email={member.email} variant="caption" tone="muted" />
         </View>
         <View style={[styles.status, member.active ? styles.active : styles.inactive]}>
           <AppText variant="label" style={{ color: member.active ? colors.success : colors.textMuted }}>
@@ -32,17 +38,32 @@ export function TeamMemberRow({ member, isSelf }: TeamMemberRowProps) {
           </AppText>
         </View>
       </View>
-      {canToggle ? (
+      {canToggle && confirming ? (
+        <ConfirmStep
+          question={`Deactivate ${member.name}? They are signed out everywhere and can no longer sign in. Their fittings stay with the shop; you can reactivate them later.`}
+          confirmTitle="Deactivate"
+          confirmLabel={`Yes, deactivate ${member.name}`}
+          onConfirm={() => setActive(false)}
+          onCancel={() => {
+            setConfirming(false);
+            update.reset();
+          }}
+          busy={update.isPending}
+          error={update.error}
+          errorTitle="Not deactivated"
+        />
+      ) : null}
+      {canToggle && !confirming ? (
         <Button
           title={member.active ? 'Deactivate' : 'Reactivate'}
           accessibilityLabel={`${member.active ? 'Deactivate' : 'Reactivate'} ${member.name}`}
           variant={member.active ? 'danger' : 'secondary'}
           compact
           busy={update.isPending}
-          onPress={() => update.mutate({ id: member.id, active: !member.active })}
+          onPress={() => (member.active ? setConfirming(true) : setActive(true))}
         />
       ) : null}
-      {update.error ? (
+      {update.error && !confirming ? (
         <AppText variant="caption" tone="danger" accessibilityRole="alert">
           {errorMessage(update.error)}
         </AppText>

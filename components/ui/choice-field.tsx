@@ -45,7 +45,8 @@ const styles = StyleSheet.create({
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
   option: {
     minHeight: layout.minTouchPx,
-    paddingHorizontal: space.lg,
+    minWidth: layout.minTouchPx,
+    paddingHorizontal: space.md,
     justifyContent: 'center',
     borderRadius: radius.md,
     borderWidth: 1,

@@ -1,8 +1,16 @@
 import { StyleSheet, View } from 'react-native';
 import { colors, space } from '../theme';
 import { AppText } from './app-text';
+import { EmailText } from './email-text';
 
-type DetailListProps = { items: readonly { label: string; value: string | null | undefined }[] };
+type DetailItem = {
+  label: string;
+  value: string | null | undefined;
+  /** An e-mail address: wraps after its "@", not mid-word. */
+  email?: boolean;
+};
+
+type DetailListProps = { items: readonly DetailItem[] };
 
 /** Label–value pairs; a missing value shows as "Not recorded". */
 export function DetailList({ items }: DetailListProps) {
@@ -13,7 +21,11 @@ export function DetailList({ items }: DetailListProps) {
           <AppText variant="label" tone="muted" style={styles.label}>
             {item.label}
           </AppText>
-          <AppText style={[styles.value, !item.value && styles.missing]}>{item.value || 'Not recorded'}</AppText>
+          {item.value && item.email ? (
+            <EmailText email={item.value} style={styles.value} selectable />
+          ) : (
+            <AppText style={[styles.value, !item.value && styles.missing]}>{item.value || 'Not recorded'}</AppText>
+          )}
         </View>
       ))}
     </View>

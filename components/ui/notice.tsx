@@ -1,4 +1,4 @@
-import type { ReactNode } from 'react';
+import { Children, type ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { colors, radius, space } from '../theme';
 import { AppText } from './app-text';
@@ -12,7 +12,11 @@ const palette = {
   info: { bg: colors.surfaceSunk, border: colors.border, fg: colors.ink },
 } as const;
 
-/** A coloured band in the page: a form error, a caution, a confirmation. */
+/** Plain words (a string, or strings and numbers side by side as `{name} has…` makes them). */
+const isPlainText = (children: ReactNode): boolean =>
+  Children.toArray(children).every((c) => typeof c === 'string' || typeof c === 'number');
+
+/** A coloured band in the page: a form error, a caution, a confirmation. Plain words are set in the app's font. */
 export function Notice({ tone, title, children }: NoticeProps) {
   const p = palette[tone];
   return (
@@ -25,7 +29,7 @@ export function Notice({ tone, title, children }: NoticeProps) {
           {title}
         </AppText>
       ) : null}
-      {typeof children === 'string' ? <AppText>{children}</AppText> : children}
+      {isPlainText(children) ? <AppText>{children}</AppText> : children}
     </View>
   );
 }

@@ -1,13 +1,24 @@
-import { StyleSheet, Switch, View } from 'react-native';
-import { colors, layout, space } from '../theme';
+import { Pressable, StyleSheet, View } from 'react-native';
+import { colors, layout, radius, space } from '../theme';
 import { AppText } from './app-text';
 
-type SwitchFieldProps = { label: string; hint?: string; value: boolean; onChange: (value: boolean) => void };
+type SwitchFieldProps = { label: string; hint?: string; value: boolean; onChange: (value: boolean) => void; disabled?: boolean };
 
-/** A yes/no setting with a label and a short explanation. */
-export function SwitchField({ label, hint, value, onChange }: SwitchFieldProps) {
+/**
+ * A yes/no setting with a label and a short explanation. The whole row is the control (at least
+ * 44 px tall), so the label is as good a target as the drawn switch.
+ */
+export function SwitchField({ label, hint, value, onChange, disabled = false }: SwitchFieldProps) {
   return (
-    <View style={styles.row}>
+    <Pressable
+      accessibilityRole="switch"
+      accessibilityLabel={label}
+      aria-checked={value}
+      aria-disabled={disabled}
+      disabled={disabled}
+      onPress={() => onChange(!value)}
+      style={[styles.row, disabled && styles.disabled]}
+    >
       <View style={styles.text}>
         <AppText variant="label">{label}</AppText>
         {hint ? (
@@ -16,19 +27,35 @@ export function SwitchField({ label, hint, value, onChange }: SwitchFieldProps) 
           </AppText>
         ) : null}
       </View>
-      <Switch
-        accessibilityLabel={label}
-        value={value}
-        onValueChange={onChange}
-        trackColor={{ false: colors.border, true: colors.ink }}
-        thumbColor={colors.surface}
-        {...({ activeThumbColor: colors.surface } as object)}
-      />
-    </View>
+      <View style={[styles.track, value && styles.trackOn]}>
+        <View style={[styles.thumb, value && styles.thumbOn]} />
+      </View>
+    </Pressable>
   );
 }
 
+const TRACK = { width: 48, height: 28 } as const;
+const THUMB = 22;
+
 const styles = StyleSheet.create({
-  row: { flexDirection: 'row', alignItems: 'center', gap: space.md, minHeight: layout.minTouchPx },
+  row: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: space.md,
+    minHeight: layout.minTouchPx,
+    paddingVertical: space.xs,
+  },
+  disabled: { opacity: 0.55 },
   text: { flex: 1, gap: 2 },
+  track: {
+    width: TRACK.width,
+    height: TRACK.height,
+    borderRadius: radius.pill,
+    backgroundColor: colors.border,
+    padding: (TRACK.height - THUMB) / 2,
+    justifyContent: 'center',
+  },
+  trackOn: { backgroundColor: colors.ink },
+  thumb: { width: THUMB, height: THUMB, borderRadius: radius.pill, backgroundColor: colors.surface },
+  thumbOn: { alignSelf: 'flex-end' },
 });

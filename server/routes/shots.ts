@@ -6,7 +6,7 @@ import { sendPreparedJson } from '../middleware/send-prepared-json';
 import { analysisQuerySchema, buildSpecBodySchema, idParamsSchema, shotDecisionBodySchema } from '../schemas';
 import { analyseFitting } from '../services/analysis';
 import { type AnalysisCache, cachedFittingAnalysis } from '../services/analysis-cache';
-import { listBuilds, updateBuild } from '../services/bay-files';
+import { getBuild, listBuilds, updateBuild } from '../services/bay-files';
 import { listShots, setShotDecision } from '../services/shots';
 
 export function shotsRouter(sequelize: Sequelize, analysisCache: AnalysisCache): Router {
@@ -35,6 +35,10 @@ export function shotsRouter(sequelize: Sequelize, analysisCache: AnalysisCache):
   router.get('/fittings/:id/builds', async (req, res) => {
     const { id } = idParamsSchema.parse(req.params);
     res.json(await listBuilds(actorOf(res), id));
+  });
+  router.get('/builds/:id', async (req, res) => {
+    const { id } = idParamsSchema.parse(req.params);
+    res.json(await getBuild(actorOf(res), id));
   });
   router.patch('/builds/:id', async (req, res) => {
     const { id } = idParamsSchema.parse(req.params);

@@ -33,3 +33,7 @@ export const resetBodySchema = z.object({
   token: z.string().min(20, 'This link is incomplete.').max(200),
   password: z.string().min(10, 'A password needs at least 10 characters.').max(200),
 });
+
+/** GET /api/demo: whether the invented demo is loaded (nothing else). */
+export const demoStatusSchema = z.object({ demo: z.boolean() });
+export type DemoStatus = z.infer<typeof demoStatusSchema>;

@@ -54,6 +54,8 @@ export const bayFileSchema = z.object({
 export type BayFile = z.infer<typeof bayFileSchema>;
 
 export const savedRecipeBodySchema = z.object({ name: z.string().trim().min(1, 'Name the recipe.').max(120), recipe: recipeSchema });
+/** PATCH /api/recipes/:id: a new name. */
+export const recipeRenameBodySchema = z.object({ name: z.string().trim().min(1, 'Name the recipe.').max(120, 'At most 120 characters.') });
 export const savedRecipeSchema = z.object({ id: z.string(), name: z.string(), recipe: recipeSchema, createdAt: z.string() });
 export type SavedRecipe = z.infer<typeof savedRecipeSchema>;
 

@@ -55,7 +55,23 @@ export const fittingSchema = z.object({
 });
 export type Fitting = z.infer<typeof fittingSchema>;
 
-export const fittingListQuerySchema = z.object({
-  playerId: z.uuid().optional(),
+/** How a list of fittings is ordered: by date (newest first by default) or by player name. */
+export const fittingSortSchema = z.enum(['date-desc', 'date-asc', 'player-asc', 'player-desc'], {
+  message: 'Sort is date-desc, date-asc, player-asc or player-desc.',
 });
-export type FittingFilters = z.infer<typeof fittingListQuerySchema>;
+export type FittingSort = z.infer<typeof fittingSortSchema>;
+
+/** GET /api/fittings query: one player, a player-name search, a date range (inclusive) and the order. */
+export const fittingListQuerySchema = z
+  .object({
+    playerId: z.uuid().optional(),
+    /** Part of the player's name (case-insensitive). */
+    q: z.string().trim().max(100, 'Search with at most 100 characters.').optional(),
+    from: z.iso.date({ message: 'From is a date as YYYY-MM-DD.' }).optional(),
+    to: z.iso.date({ message: 'To is a date as YYYY-MM-DD.' }).optional(),
+    sort: fittingSortSchema.default('date-desc'),
+  })
+  .refine((f) => !f.from || !f.to || f.from <= f.to, { path: ['to'], message: 'To is on or after From.' });
+/** What a list asks for (sort optional: newest first). */
+export type FittingFilters = z.input<typeof fittingListQuerySchema>;
+export type FittingListQuery = z.output<typeof fittingListQuerySchema>;

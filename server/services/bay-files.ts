@@ -12,7 +12,7 @@ import { BayFile, Build, Fitting, Recipe as RecipeModel } from '../models';
 import { specOf } from '../models/spec-attributes';
 import type { BayFile as BayFileDto, BuildAssignment, ImportReport, SavedRecipe, buildSpecBodySchema, importOptionsSchema } from '../schemas';
 import type { z } from 'zod';
-import { type Actor, isStaff, requireStaff } from './actor';
+import { type Actor, isStaff, requireOwner, requireStaff } from './actor';
 import { findVisibleFitting } from './fittings';
 import { bumpFittingRevision } from './fitting-revision';
 import { decisionsOf, insertShots } from './shot-store';
@@ -162,6 +162,8 @@ export async function previewBayFile(actor: Actor, fittingId: string, file: Uplo
     sniff: result.sniff,
     recipe: result.recipe,
     suggestions: result.suggestions,
+    /** Guesses the fitter should confirm (a sign convention assumed, a unit inferred…). */
+    ambiguous: result.ambiguous,
     report: reportOf(result),
     shots: result.shots.slice(0, 25),
   };
@@ -321,6 +323,28 @@ export async function saveRecipe(actor: Actor, name: string, recipe: Recipe): Pr
   return toSaved(await RecipeModel.create({ shopId: actor.shopId, name, recipe: JSON.stringify(recipe), createdBy: actor.id }));
 }
 
+/** One saved recipe of the actor's shop (staff), or 404. */
+export async function getRecipe(actor: Actor, id: string): Promise<SavedRecipe> {
+  requireStaff(actor);
+  const recipe = await RecipeModel.findOne({ where: { id, shopId: actor.shopId } });
+  if (!recipe) throw notFound('That recipe');
+  return toSaved(recipe);
+}
+
+/** Renames a saved recipe (the owner manages the shop's recipes); a name the shop uses already answers 409. */
+export async function renameRecipe(actor: Actor, id: string, name: string): Promise<SavedRecipe> {
+  requireOwner(actor);
+  const recipe = await RecipeModel.findOne({ where: { id, shopId: actor.shopId } });
+  if (!recipe) throw notFound('That recipe');
+  if (recipe.name === name) return toSaved(recipe);
+  if (await RecipeModel.findOne({ where: { shopId: actor.shopId, name } })) {
+    throw new HttpError(409, 'RECIPE_NAME_TAKEN', 'Your shop already has a recipe with that name.');
+  }
+  recipe.name = name;
+  await recipe.save();
+  return toSaved(recipe);
+}
+
 export async function deleteRecipe(actor: Actor, id: string): Promise<void> {
   requireStaff(actor);
   const n = await RecipeModel.destroy({ where: { id, shopId: actor.shopId } });
@@ -336,13 +360,24 @@ export async function listBuilds(actor: Actor, fittingId: string) {
   return (await Build.findAll({ where: { fittingId }, order: [['club', 'ASC'], ['label', 'ASC']] })).map(toBuild);
 }
 
-export async function updateBuild(actor: Actor, id: string, body: z.output<typeof buildSpecBodySchema>) {
-  requireStaff(actor);
+/** A build of a fitting the actor may see, or 404 (another shop's or player's answers the same). */
+async function findVisibleBuild(actor: Actor, id: string): Promise<Build> {
   const build = await Build.findByPk(id);
   if (!build) throw notFound('That build');
   await findVisibleFitting(actor, build.fittingId).catch(() => {
     throw notFound('That build');
   });
+  return build;
+}
+
+/** One build by its id (its edit page opened by address needs no fitting id). */
+export async function getBuild(actor: Actor, id: string) {
+  return toBuild(await findVisibleBuild(actor, id));
+}
+
+export async function updateBuild(actor: Actor, id: string, body: z.output<typeof buildSpecBodySchema>) {
+  requireStaff(actor);
+  const build = await findVisibleBuild(actor, id);
   for (const [key, value] of Object.entries(body)) if (value !== undefined) build.set(key as keyof typeof body, value as never);
   await Build.sequelize!.transaction(async (transaction) => {
     await build.save({ transaction });

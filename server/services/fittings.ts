@@ -1,8 +1,8 @@
-import { Op, type WhereOptions } from 'sequelize';
+import { Op, type Order, type WhereOptions } from 'sequelize';
 import type { z } from 'zod';
 import { HttpError, notFound } from '../errors';
 import { Fitting as FittingModel, Player, User } from '../models';
-import type { Fitting, FittingFilters, fittingBodySchema, fittingUpdateSchema } from '../schemas';
+import type { Fitting, FittingListQuery, fittingBodySchema, fittingUpdateSchema } from '../schemas';
 import { type Actor, isStaff, requireStaff } from './actor';
 import { bumpFittingRevision } from './fitting-revision';
 import { findVisiblePlayer } from './players';
@@ -44,11 +44,28 @@ export function visibleFittings(actor: Actor): WhereOptions<FittingModel> {
   return { shopId: actor.shopId, playerId: actor.playerId ?? '00000000-0000-0000-0000-000000000000' };
 }
 
-export async function listFittings(actor: Actor, filters: FittingFilters): Promise<Fitting[]> {
-  const where: WhereOptions<FittingModel> = filters.playerId
-    ? { [Op.and]: [visibleFittings(actor), { playerId: filters.playerId }] }
-    : visibleFittings(actor);
-  const fittings = await FittingModel.findAll({ where, include, order: [['date', 'DESC'], ['createdAt', 'DESC']], limit: 500 });
+/** A LIKE pattern that finds `text` anywhere, its own wildcards taken literally (as players.ts does). */
+const containsPattern = (text: string): string => `%${text.replace(/[%_\\]/g, '\\$&')}%`;
+
+const ORDER: Record<FittingListQuery['sort'], Order> = {
+  'date-desc': [['date', 'DESC'], ['createdAt', 'DESC']],
+  'date-asc': [['date', 'ASC'], ['createdAt', 'ASC']],
+  'player-asc': [[{ model: Player, as: 'player' }, 'name', 'ASC'], ['date', 'DESC']],
+  'player-desc': [[{ model: Player, as: 'player' }, 'name', 'DESC'], ['date', 'DESC']],
+};
+
+/** The fittings an actor may see, filtered (player, name search, date range) and ordered; at most 500. */
+export async function listFittings(actor: Actor, filters: FittingListQuery): Promise<Fitting[]> {
+  const where: WhereOptions<FittingModel>[] = [visibleFittings(actor)];
+  if (filters.playerId) where.push({ playerId: filters.playerId });
+  if (filters.from || filters.to) {
+    const range: Record<symbol, string> = {};
+    if (filters.from) range[Op.gte] = filters.from;
+    if (filters.to) range[Op.lte] = filters.to;
+    where.push({ date: range });
+  }
+  if (filters.q) where.push({ '$player.name$': { [Op.like]: containsPattern(filters.q) } } as WhereOptions<FittingModel>);
+  const fittings = await FittingModel.findAll({ where: { [Op.and]: where }, include, order: ORDER[filters.sort], limit: 500 });
   const shots = await countShots(fittings.map((f) => f.id));
   return fittings.map((f) => toFitting(f, shots.get(f.id) ?? 0));
 }

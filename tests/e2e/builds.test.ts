@@ -26,12 +26,12 @@ describe('editing a build’s specs in the browser', () => {
 
     await page.getByRole('button', { name: 'Save' }).click();
     await page.getByRole('heading', { name: 'Builds' }).waitFor({ timeout: 30_000 });
-    await page.getByText(/10\.5° · .*46\.5 in/).first().waitFor({ timeout: 30_000 });
+    await page.getByText(/10\.5°\s·.*46\.5\sin/).first().waitFor({ timeout: 30_000 });
     await page.getByText('Longer than 46 in: see Local Rule G-10').waitFor();
 
     // saved on the server: a reload shows the same line
     await page.reload();
-    await page.getByText(/10\.5° · .*46\.5 in/).first().waitFor({ timeout: 30_000 });
+    await page.getByText(/10\.5°\s·.*46\.5\sin/).first().waitFor({ timeout: 30_000 });
     await page.close();
   });
 });

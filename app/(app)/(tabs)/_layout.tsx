@@ -1,8 +1,9 @@
 import { Tabs } from 'expo-router';
 import type { ColorValue } from 'react-native';
 import { canManageTeam, isStaff } from '@/components/session/permissions';
+import { guardedScreen } from '@/components/session/route-guard';
 import { useMe } from '@/components/session/session-provider';
-import { headerOptions } from '@/components/ui/stack-options';
+import { tabHeaderOptions } from '@/components/ui/stack-options';
 import { TabIcon, type TabIconName } from '@/components/ui/tab-icon';
 import { colors, fonts } from '@/components/theme';
 
@@ -19,8 +20,9 @@ export default function TabsLayout() {
   const staff = isStaff(me.role);
   return (
     <Tabs
+      screenLayout={guardedScreen}
       screenOptions={{
-        ...headerOptions,
+        ...tabHeaderOptions,
         sceneStyle: { backgroundColor: colors.paper },
         tabBarActiveTintColor: colors.accent,
         tabBarInactiveTintColor: colors.textMuted,

@@ -20,7 +20,7 @@ export default function AccountScreen() {
           <DetailList
             items={[
               { label: 'Name', value: me.name },
-              { label: 'E-mail', value: me.email },
+              { label: 'E-mail', value: me.email, email: true },
               { label: 'Shop', value: me.shop.name },
               { label: 'Role', value: formatRole(me.role) },
             ]}

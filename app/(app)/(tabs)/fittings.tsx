@@ -1,18 +1,29 @@
 import { useRouter } from 'expo-router';
+import { useState } from 'react';
+import { FittingFilterBar, hasFittingFilters, NO_FITTING_FILTERS, type FittingFilterText } from '@/components/fittings/fitting-filter-bar';
 import { FittingList } from '@/components/fittings/fitting-list';
+import { useDebouncedValue } from '@/components/use-debounced-value';
 import { Button } from '@/components/ui/button';
 import { Screen } from '@/components/ui/screen';
 
 export default function FittingsScreen() {
   const router = useRouter();
+  const [filters, setFilters] = useState<FittingFilterText>(NO_FITTING_FILTERS);
+  const q = useDebouncedValue(filters.q);
+  const filtered = hasFittingFilters(filters);
   return (
     <Screen>
       <Button title="New fitting" variant="secondary" compact onPress={() => router.push('/fittings/new')} />
+      <FittingFilterBar value={filters} onChange={setFilters} />
       <FittingList
-        filters={{}}
-        emptyTitle="No fittings yet"
-        emptyMessage="A fitting is one appointment: a player, a date and a venue. Start one from here or from a player's page."
-        emptyAction={<Button title="New fitting" onPress={() => router.push('/fittings/new')} />}
+        filters={{ q: q.trim() || undefined, from: filters.from || undefined, to: filters.to || undefined, sort: filters.sort }}
+        emptyTitle={filtered ? 'No fitting matches' : 'No fittings yet'}
+        emptyMessage={
+          filtered
+            ? 'No fitting of your shop matches this search and these dates. Clear the filters to see them all.'
+            : "A fitting is one appointment: a player, a date and a venue. Start one from here or from a player's page."
+        }
+        emptyAction={filtered ? undefined : <Button title="New fitting" onPress={() => router.push('/fittings/new')} />}
       />
     </Screen>
   );

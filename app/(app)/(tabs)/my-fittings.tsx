@@ -8,7 +8,7 @@ export default function MyFittingsScreen() {
   const me = useMe();
   return (
     <Screen>
-      <AppText tone="muted">Your fittings at {me.shop.name}. Open one to see its details and, later, your shots.</AppText>
+      <AppText tone="muted">Your fittings at {me.shop.name}. Open one to see your shots, where they landed and the builds you tried.</AppText>
       <FittingList
         filters={me.playerId ? { playerId: me.playerId } : {}}
         showPlayer={false}

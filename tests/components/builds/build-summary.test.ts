@@ -1,4 +1,9 @@
-import { buildName, buildSummary, groupBuildsByClub, specNumber } from '@/components/builds/build-summary';
+import { buildName, buildSpecLines as specLines, buildSummary as summary, groupBuildsByClub, NBSP, specNumber } from '@/components/builds/build-summary';
+import type { BuildSpec } from '@/components/builds/build-summary';
+
+/** The texts with no-break spaces written as plain ones (they are checked on their own below). */
+const buildSummary = (spec: Partial<BuildSpec>) => summary(spec)?.split(NBSP).join(' ') ?? null;
+const buildSpecLines = (spec: Partial<BuildSpec>) => specLines(spec).map((l) => l.split(NBSP).join(' '));
 import type { Build } from '@/server/schemas';
 
 // Invented builds (no real heads or shafts).
@@ -11,10 +16,10 @@ const build = (club: string, label: string, spec: Partial<typeof EMPTY> = {}): B
 });
 
 describe('buildSummary', () => {
-  it('buildSummary, loft hosel length shaft and mass, joins them with dots in workshop order', () => {
+  it('buildSummary, loft hosel length shaft and mass, labels each part, one line per group in workshop order', () => {
     expect(
       buildSummary({ loftDeg: 10.5, hoselSetting: '+1', lengthIn: 45.75, shaft: 'Graphite', shaftWeightG: 60, shaftFlex: 'S', addedMassG: 6, addedMassWhere: 'heel' }),
-    ).toBe('10.5° · +1 hosel · 45.75 in · Graphite 60 g S · 6 g heel');
+    ).toBe('Loft 10.5° · Hosel: +1 · Length 45.75 in\nShaft: Graphite · 60 g · S flex\nAdded mass: 6 g heel');
   });
 
   it('buildSummary, every spec, includes each once and leaves the notes out', () => {
@@ -23,7 +28,19 @@ describe('buildSummary', () => {
         ...EMPTY, head: 'Larch 440', loftDeg: 9, hoselSetting: 'Upright', lieDeg: 58.5, lengthIn: 45.875, shaft: 'Birch', shaftWeightG: 65,
         shaftFlex: 'X', torqueDeg: 3.8, grip: 'Midsize', swingWeight: 'D3', addedMassG: 4, addedMassWhere: 'back', notes: 'Try a lighter grip',
       }),
-    ).toBe('Larch 440 · 9° · Upright hosel · lie 58.5° · 45.875 in · Birch 65 g X 3.8° torque · Midsize grip · D3 swing weight · 4 g back');
+    ).toBe(
+      'Head: Larch 440 · Loft 9° · Hosel: Upright · Lie 58.5° · Length 45.875 in\n' +
+        'Shaft: Birch · 65 g · X flex · 3.8° torque\n' +
+        'Grip: Midsize · Swing weight D3 · Added mass: 4 g back',
+    );
+  });
+
+  it('buildSummary, a number in the shaft name and the same weight, keeps them apart with labels', () => {
+    expect(buildSummary({ shaft: 'Test graphite 75', shaftWeightG: 75, shaftFlex: 'R' })).toBe('Shaft: Test graphite 75 · 75 g · R flex');
+  });
+
+  it('buildSummary, shaft weight and flex without a name, still labels the shaft', () => {
+    expect(buildSummary({ shaftWeightG: 65, shaftFlex: 'Stiff flex' })).toBe('Shaft: 65 g · Stiff flex');
   });
 
   it('buildSummary, nothing set or only blanks, is null', () => {
@@ -32,12 +49,22 @@ describe('buildSummary', () => {
   });
 
   it('buildSummary, zero added mass, is a value and not a blank', () => {
-    expect(buildSummary({ addedMassG: 0 })).toBe('0 g added');
-    expect(buildSummary({ addedMassWhere: 'toe' })).toBe('mass toe');
+    expect(buildSummary({ addedMassG: 0 })).toBe('Added mass: 0 g');
+    expect(buildSummary({ addedMassWhere: 'toe' })).toBe('Added mass: toe');
   });
 
-  it('buildSummary, words already present, are not repeated', () => {
-    expect(buildSummary({ hoselSetting: 'Hosel 3', grip: 'Standard grip' })).toBe('Hosel 3 · Standard grip');
+  it('buildSummary, a value that starts with its label, is not labelled twice', () => {
+    expect(buildSummary({ hoselSetting: 'Hosel 3', grip: 'Grip wrap, midsize' })).toBe('Hosel 3\nGrip wrap, midsize');
+  });
+
+  it('buildSummary, numbers and their units and labels, are joined by no-break spaces (wraps fall between parts)', () => {
+    expect(summary({ loftDeg: 9, lengthIn: 45.5, shaftWeightG: 65, shaftFlex: 'X', swingWeight: 'D2' })).toBe(
+      `Loft${NBSP}9°${NBSP}· Length${NBSP}45.5${NBSP}in\nShaft: 65${NBSP}g${NBSP}· X${NBSP}flex\nSwing${NBSP}weight${NBSP}D2`,
+    );
+  });
+
+  it('buildSpecLines, only the shaft set, is that one line', () => {
+    expect(buildSpecLines({ shaft: 'Birch', torqueDeg: 4 })).toEqual(['Shaft: Birch · 4° torque']);
   });
 });
 

@@ -1,5 +1,5 @@
 import { buildLadder, classifyCarryGap, type LadderRung } from '@/analysis/ladder';
-import { GAP_FLAG_WORDS, gapFlagWord, ladderChartGeometry, shortClubLabel } from '@/components/charts/ladder-chart-geometry';
+import { GAP_FLAG_WORDS, gapFlagWord, ladderChartGeometry, ladderClubLabel } from '@/components/charts/ladder-chart-geometry';
 
 const YARD_M = 0.9144; // NIST Special Publication 811 (2008), Appendix B: 1 yd = 0.9144 m exactly
 
@@ -31,7 +31,7 @@ describe('ladderChartGeometry', () => {
     ]);
     const g = ladderChartGeometry({ rungs, units: 'metric', widthPx: 390 });
     expect(g.rows.map((r) => r.club)).toEqual(['7I', '8I', 'PW']);
-    expect(g.rows.map((r) => r.label)).toEqual(['7 iron', '8 iron', 'PW']);
+    expect(g.rows.map((r) => r.label)).toEqual(['7 iron', '8 iron', 'Pitching wedge']);
     for (let i = 1; i < g.rows.length; i++) {
       expect(g.rows[i].y).toBeGreaterThan(g.rows[i - 1].y);
       expect(g.rows[i].medianX).toBeLessThan(g.rows[i - 1].medianX);
@@ -111,8 +111,22 @@ describe('ladderChartGeometry', () => {
   });
 });
 
-describe('shortClubLabel', () => {
-  it('shortClubLabel names woods and irons in words and wedges by code or loft', () => {
-    expect(['DR', '3W', '4H', '7I', 'PW', 'W56', 'XX'].map(shortClubLabel)).toEqual(['Driver', '3 wood', '4 hybrid', '7 iron', 'PW', '56°', 'XX']);
+describe('ladderChartGeometry label column', () => {
+  it('ladderChartGeometry, a pitching wedge in the ladder, widens the label column to fit its full name', () => {
+    const rungs = buildLadder([
+      { club: '9I', build: null, carryM: [120, 121, 122] },
+      { club: 'PW', build: null, carryM: [110, 112, 111] },
+    ]);
+    const irons = ladderChartGeometry({ rungs: rungs.slice(0, 1), units: 'metric', widthPx: 390 });
+    const withWedge = ladderChartGeometry({ rungs, units: 'metric', widthPx: 390 });
+    // 14 characters at 13 px Inter need about 95 px (common practice, no source: ~0.55 em per character)
+    expect(withWedge.plot.left).toBeGreaterThanOrEqual(100);
+    expect(withWedge.plot.left).toBeGreaterThan(irons.plot.left);
+  });
+});
+
+describe('ladderClubLabel', () => {
+  it('ladderClubLabel names every club in full words, wedges too (never a code)', () => {
+    expect(['DR', '3W', '4H', '7I', 'PW', 'W56', 'XX'].map(ladderClubLabel)).toEqual(['Driver', '3 wood', '4 hybrid', '7 iron', 'Pitching wedge', '56° wedge', 'XX']);
   });
 });

@@ -22,17 +22,29 @@ describe('formatShotValue', () => {
     expect(formatShotValue(shot({ offline: 0.01 }), 'offline', 'metric')).toBe('0.0');
   });
 
+  it('formatShotValue, a spin axis tilted left, is written with L like offline', () => {
+    expect(formatShotValue(shot({ spinAxis: -6.2 }), 'spinAxis', 'metric')).toBe('6.2 L');
+  });
+
   it('formatShotValue, a missing field, is a dash', () => {
     expect(formatShotValue(shot({}), 'carry', 'metric')).toBe('–');
   });
 });
 
 describe('previewColumns', () => {
+  it('previewColumns, shots with every preview field, keeps offline and launch direction (no cap at five)', () => {
+    const cols = previewColumns(
+      [shot({ ballSpeed: 60, clubSpeed: 42, launchAngle: 12, launchDirection: 1, spinRate: 3000, spinAxis: 2, carry: 200, offline: -3, total: 215 })],
+      'metric',
+    );
+    expect(cols.map((c) => c.field)).toEqual(['carry', 'offline', 'total', 'launchDirection', 'spinAxis', 'ballSpeed', 'clubSpeed', 'launchAngle', 'spinRate']);
+  });
+
   it('previewColumns, shots with carry and spin only, shows just those with display units', () => {
     const cols = previewColumns([shot({ carry: 150 }), shot({ spinRate: 6000 })], 'imperial');
     expect(cols.map((c) => [c.field, c.unit])).toEqual([
-      ['spinRate', 'rpm'],
       ['carry', 'yd'],
+      ['spinRate', 'rpm'],
     ]);
   });
 });

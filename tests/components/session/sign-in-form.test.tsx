@@ -4,11 +4,11 @@ import { SignInForm } from '@/components/session/sign-in-form';
 import { createQueryClient } from '@/components/queries/query-client';
 import { apiAnswer, pageText } from '../../support/render-helpers';
 
-function renderForm(onSignedIn = jest.fn()) {
+function renderForm(onSignedIn = jest.fn(), demo = false) {
   const client = createQueryClient();
   render(
     <QueryClientProvider client={client}>
-      <SignInForm onSignedIn={onSignedIn} />
+      <SignInForm onSignedIn={onSignedIn} demo={demo} />
     </QueryClientProvider>,
   );
   return { onSignedIn, client };
@@ -67,5 +67,37 @@ describe('SignInForm', () => {
     const json = JSON.stringify(screen.toJSON());
     expect(json).toContain('"href":"/forgot"');
     expect(pageText()).toContain('Forgot your password?');
+  });
+
+  it('SignInForm, a refusal and then the fields emptied, drops the old refusal and shows only the field errors', async () => {
+    fetchMock.mockResolvedValue(apiAnswer(401, { error: { code: 'BAD_CREDENTIALS', message: 'E-mail or password is wrong.' } }));
+    renderForm();
+    fireEvent.changeText(screen.getByLabelText('E-mail'), 'someone@example.test');
+    fireEvent.changeText(screen.getByLabelText('Password'), 'not-it');
+    fireEvent.press(screen.getByLabelText('Sign in'));
+    await waitFor(() => expect(pageText()).toMatch(/do not match/));
+    fireEvent.changeText(screen.getByLabelText('Password'), '');
+    expect(pageText()).not.toMatch(/do not match/);
+    fireEvent.changeText(screen.getByLabelText('E-mail'), '');
+    fireEvent.press(screen.getByLabelText('Sign in'));
+    expect(pageText()).toContain('Enter an e-mail address.');
+    expect(pageText()).toContain('Enter your password.');
+    expect(pageText()).not.toMatch(/do not match/);
+    expect(fetchMock).toHaveBeenCalledTimes(1);
+  });
+
+  it('SignInForm, no demo loaded, shows no demo sign-ins and leaves the fields empty', () => {
+    renderForm(jest.fn(), false);
+    expect(pageText()).not.toMatch(/Demo|larchmere|ovalyard-demo/);
+    expect(screen.getByLabelText('E-mail').props.value).toBe('');
+    expect(screen.getByLabelText('Password').props.value).toBe('');
+  });
+
+  it('SignInForm, the demo loaded, lists the demo sign-ins and fills in the fitter’s', () => {
+    renderForm(jest.fn(), true);
+    expect(pageText()).toContain('oskar@larchmere.example');
+    expect(pageText()).toContain('hedda@larchmere.example');
+    expect(screen.getByLabelText('E-mail').props.value).toBe('oskar@larchmere.example');
+    expect(screen.getByLabelText('Password').props.value).toBe('ovalyard-demo');
   });
 });

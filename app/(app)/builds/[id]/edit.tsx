@@ -7,25 +7,19 @@ import { useBuildQuery, useUpdateBuildMutation } from '@/components/queries/buil
 import { AppText } from '@/components/ui/app-text';
 import { ErrorState } from '@/components/ui/error-state';
 import { LoadingState } from '@/components/ui/loading-state';
-import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 
-/** /builds/:id/edit?fittingId=… — the API lists builds per fitting, so the fitting comes along. */
+/** /builds/:id/edit — the build is loaded by its id; back leads to its fitting. */
 export default function EditBuildScreen() {
-  const { id, fittingId = '' } = useLocalSearchParams<{ id: string; fittingId?: string }>();
-  const goBack = useGoBack(fittingId ? { pathname: '/fittings/[id]', params: { id: fittingId } } : '/fittings');
-  const query = useBuildQuery(fittingId, id);
-  const update = useUpdateBuildMutation(fittingId);
+  const { id } = useLocalSearchParams<{ id: string }>();
+  const query = useBuildQuery(id);
+  const update = useUpdateBuildMutation();
   const build = query.data;
+  const goBack = useGoBack(build ? { pathname: '/fittings/[id]', params: { id: build.fittingId } } : '/fittings');
   return (
     <Screen>
       <Stack.Screen options={{ title: 'Edit build' }} />
-      {!fittingId || build === null ? (
-        <Notice tone="danger" title="Build not found">
-          Open the build from its fitting’s page, under Builds.
-        </Notice>
-      ) : null}
-      {fittingId && query.isPending ? <LoadingState label="Loading the build…" /> : null}
+      {query.isPending ? <LoadingState label="Loading the build…" /> : null}
       {query.isError ? <ErrorState error={query.error} onRetry={() => void query.refetch()} /> : null}
       {build ? (
         <>

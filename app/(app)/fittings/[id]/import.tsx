@@ -1,4 +1,4 @@
-import { Stack, useLocalSearchParams } from 'expo-router';
+import { Redirect, Stack, useLocalSearchParams } from 'expo-router';
 import { ImportFlow } from '@/components/import/import-flow';
 import { useGoBack } from '@/components/navigation';
 import { useFittingQuery } from '@/components/queries/fittings';
@@ -14,6 +14,8 @@ export default function ImportBayFileScreen() {
   const me = useMe();
   const goBack = useGoBack({ pathname: '/fittings/[id]', params: { id } });
   const query = useFittingQuery(id);
+  // A player imports only into their own remote fitting; any other address sends them home.
+  if (query.data && !isStaff(me.role) && !query.data.remote) return <Redirect href="/" />;
   return (
     <Screen>
       <Stack.Screen options={{ title: 'Import a bay file' }} />

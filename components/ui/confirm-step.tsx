@@ -1,9 +1,9 @@
 import { StyleSheet, View } from 'react-native';
 import { errorMessage } from '../api-client';
 import { space } from '../theme';
-import { AppText } from '../ui/app-text';
-import { Button } from '../ui/button';
-import { Notice } from '../ui/notice';
+import { AppText } from './app-text';
+import { Button } from './button';
+import { Notice } from './notice';
 
 type ConfirmStepProps = {
   /** The question, naming what goes and what follows ("Delete x.csv? Its 48 shots leave the analysis."). */
@@ -16,17 +16,22 @@ type ConfirmStepProps = {
   busy: boolean;
   /** The last attempt's error, shown in the page. */
   error: unknown;
+  /** The error's title ("Not deleted", "Not deactivated"). */
+  errorTitle?: string;
 };
 
-/** An in-page confirmation before something is deleted: the question, then Delete / Cancel. */
-export function ConfirmStep({ question, confirmTitle, confirmLabel, onConfirm, onCancel, busy, error }: ConfirmStepProps) {
+/**
+ * An in-page confirmation before something that is hard to undo (a delete, a deactivation): the
+ * question, then the confirming button and Cancel. Alert.alert does nothing on the web.
+ */
+export function ConfirmStep({ question, confirmTitle, confirmLabel, onConfirm, onCancel, busy, error, errorTitle = 'Not deleted' }: ConfirmStepProps) {
   return (
     <View style={styles.box}>
       <Notice tone="caution">
         <AppText>{question}</AppText>
       </Notice>
       {error ? (
-        <Notice tone="danger" title="Not deleted">
+        <Notice tone="danger" title={errorTitle}>
           {errorMessage(error)}
         </Notice>
       ) : null}
