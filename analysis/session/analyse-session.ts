@@ -4,10 +4,11 @@ import { compareBuilds } from '@/analysis/head-to-head';
 import type { BuildSample } from '@/analysis/head-to-head';
 import { buildLadder } from '@/analysis/ladder';
 import type { LadderGroup } from '@/analysis/ladder';
-import { analyseGroup } from './analyse-group';
+import { analyseGroup, groupStrays } from './analyse-group';
 import type { AnalysedGroup } from './analyse-group';
 import type { GroupRef, SessionAnalysis, SessionOptions } from './session-types';
 import { shotColumns } from './shot-columns';
+import type { ShotColumns } from './shot-columns';
 
 function keptValues(column: Float64Array, kept: Uint8Array): Float64Array {
   const out = new Float64Array(column.length);
@@ -23,6 +24,16 @@ function buildSample(group: AnalysedGroup): BuildSample {
   }
   columns.smashFactor = keptValues(group.columns.smashFactor, group.kept);
   return { club: group.columns.club, build: group.columns.build, columns };
+}
+
+/** Same groups, rows and order: the measured twin of carried-over shots. */
+function sameLayout(a: readonly ShotColumns[], b: readonly ShotColumns[]): boolean {
+  if (a.length !== b.length) return false;
+  for (let g = 0; g < a.length; g++) {
+    if (a[g].club !== b[g].club || a[g].build !== b[g].build || a[g].rows.length !== b[g].rows.length) return false;
+    for (let j = 0; j < a[g].rows.length; j++) if (a[g].rows[j] !== b[g].rows[j]) return false;
+  }
+  return true;
 }
 
 function findGroup(groups: AnalysedGroup[], ref: GroupRef): AnalysedGroup {
@@ -43,12 +54,14 @@ function findGroup(groups: AnalysedGroup[], ref: GroupRef): AnalysedGroup {
 export function analyseSession(shots: readonly Shot[], options: SessionOptions = {}): SessionAnalysis {
   const level = options.level ?? 0.95;
   if (!(level > 0 && level < 1)) throw new RangeError('analyseSession: level must lie in (0, 1)');
-  const settings = { level, includeStrays: options.includeStrays ?? false, decisions: options.decisions ?? {}, formatDistance: options.formatDistance };
+  const settings = { level, includeStrays: options.includeStrays ?? false, decisions: options.decisions ?? {}, formatValue: options.formatValue };
   const columns = shotColumns(shots);
+  const measured = options.measured ? shotColumns(options.measured) : null;
+  if (measured && !sameLayout(columns, measured)) throw new RangeError('analyseSession: the measured shots are not the same shots');
   let largest = 0;
   for (const c of columns) largest = Math.max(largest, c.rows.length);
   const scratch = new Float64Array(2 * largest);
-  const analysed = columns.map((c) => analyseGroup(c, settings, scratch));
+  const analysed = columns.map((c, g) => analyseGroup(c, settings, scratch, measured ? groupStrays(measured[g]) : undefined));
   analysed.sort(
     (a, b) => compareClubs(a.columns.club, b.columns.club) || (a.columns.build ?? '').localeCompare(b.columns.build ?? ''),
   );

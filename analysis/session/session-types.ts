@@ -1,9 +1,9 @@
-import type { ShotField } from '@/analysis/fields';
+import type { Shot, ShotField } from '@/analysis/fields';
 import type { HeadToHead } from '@/analysis/head-to-head';
 import type { LadderRung } from '@/analysis/ladder';
 import type { Oval } from '@/analysis/ovals';
 import type { FieldSummary } from '@/analysis/statistics';
-import type { StrayDecision } from '@/analysis/strays';
+import type { StrayDecision, StrayKind, StrayValueFormatter } from '@/analysis/strays';
 
 /** A group of shots: one club and one build. */
 export interface GroupRef {
@@ -23,16 +23,26 @@ export interface SessionOptions {
   compare?: [GroupRef, GroupRef];
   /** Loft per group, keyed `${club}|${build ?? ''}`, for the ladder's loft steps. */
   loftByGroup?: Record<string, number>;
-  /** Writes distances in stray reasons (default: metres, "148 m"). */
-  formatDistance?: (metres: number) => string;
+  /** Writes distances and speeds in stray reasons (default: canonical, "148 m", "58.1 m/s"). */
+  formatValue?: StrayValueFormatter;
+  /**
+   * The same shots as measured, when `shots` were carried over to other conditions: strays are
+   * decided on these, so normalising moves numbers, never the set of strays. Same rows, clubs
+   * and builds, in the same order.
+   */
+  measured?: readonly Shot[];
   /** Per club, the build the ladder uses; clubs not listed pool all their builds. */
   chosenBuild?: Record<string, string | null>;
 }
 
-/** One stray as the session reports it: the row and the reason in plain words (metres). */
+/** One stray as the session reports it: the row, its kind and the reason in plain words. */
 export interface SessionStray {
   row: number;
+  /** misread, mishit, review; null for a shot the fitter dropped that no rule flagged. */
+  kind: StrayKind | null;
   reason: string;
+  /** Whether the shot counts in the figures (the fitter's decision, else the rules' default). */
+  inFigures: boolean;
 }
 
 /** The oval fields of the session shape. */

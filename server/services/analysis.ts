@@ -8,6 +8,7 @@ import type { Shot } from '../../analysis/fields';
 import { normaliseShot, type AirConditions } from '../../analysis/flight';
 import { fromCanonical } from '../../analysis/units';
 import { analyseSession, type GroupRef, type SessionAnalysis } from '../../analysis/session';
+import type { StrayValueFormatter } from '../../analysis/strays';
 import { HttpError } from '../errors';
 import { Build } from '../models';
 import type { FittingAnalysis } from '../schemas';
@@ -26,10 +27,20 @@ export interface AnalysisQuery {
   to?: AirConditions;
 }
 
+/** Stray reasons in the user's units: whole yards or metres, mph or km/h to 0.1. */
+export function strayFormatter(units: 'imperial' | 'metric'): StrayValueFormatter {
+  return (value, field) => {
+    if (field === 'ballSpeed') return units === 'imperial' ? `${fromCanonical(value, 'mph', 'ballSpeed').toFixed(1)} mph` : `${fromCanonical(value, 'km/h', 'ballSpeed').toFixed(1)} km/h`;
+    return units === 'imperial' ? `${fromCanonical(value, 'yd', 'carry').toFixed(0)} yd` : `${value.toFixed(0)} m`;
+  };
+}
+
 export async function analyseFitting(sequelize: Sequelize, actor: Actor, fittingId: string, query: AnalysisQuery): Promise<FittingAnalysis> {
   const fitting = await findVisibleFitting(actor, fittingId);
   const measuredAir = airOf(fitting);
   const stored = await loadFittingShots(sequelize, fittingId);
+  // Strays are decided on the measured shots; carrying over to the course moves numbers only.
+  const measured: Shot[] | undefined = query.to ? stored.map((s) => ({ row: s.id, club: s.club, build: s.build, values: s.values, derived: s.derived })) : undefined;
   if (query.to) {
     for (const s of stored) {
       const n = normaliseShot(s.values, measuredAir, query.to);
@@ -47,9 +58,7 @@ export async function analyseFitting(sequelize: Sequelize, actor: Actor, fitting
   });
   let analysis: SessionAnalysis;
   try {
-    const yards = query.units === 'imperial';
-    const formatDistance = (m: number) => (yards ? `${fromCanonical(m, 'yd', 'carry').toFixed(0)} yd` : `${m.toFixed(0)} m`);
-    analysis = analyseSession(shots, { level: query.level, includeStrays: query.includeStrays, decisions, compare: query.compare, loftByGroup, formatDistance });
+    analysis = analyseSession(shots, { level: query.level, includeStrays: query.includeStrays, decisions, compare: query.compare, loftByGroup, formatValue: strayFormatter(query.units ?? 'imperial'), measured });
   } catch (err) {
     if (err instanceof RangeError) throw new HttpError(400, 'BAD_ANALYSIS_REQUEST', err.message.replace(/^analyseSession: /, ''));
     throw err;

@@ -45,7 +45,7 @@ describe('analyseSession', () => {
     expect(a.n).toBe(8);
     expect(a.kept).toBe(7);
     expect(a.strays.map((s) => s.row)).toEqual([5]);
-    expect(a.strays[0].reason).toMatch(/^carry 112 m is far short of this group's median 148 m/);
+    expect(a.strays[0].reason).toMatch(/^Mishit: .*carry 112 m, far short of this group's 148 m/);
     expect(a.fields.carry!.n).toBe(7);
     expect(a.fields.carry!.min).toBe(146);
   });
@@ -74,7 +74,7 @@ describe('analyseSession', () => {
     expect(a.fields.carry!.min).toBe(112);
     expect(a.fields.carry!.max).toBe(151);
     expect(a.strays).toEqual([
-      { row: 2, reason: 'dropped by the fitter' },
+      { row: 2, kind: null, reason: 'Dropped by the fitter', inFigures: false },
       expect.objectContaining({ row: 5, reason: expect.stringMatching(/\(kept by the fitter\)$/) }),
     ]);
   });
