@@ -1,5 +1,6 @@
 import { SHOT_FIELDS } from '@/analysis/fields';
 import type { ShotField } from '@/analysis/fields';
+import { DEFAULT_FAIRWAY_WIDTH_M, DEFAULT_GREEN_RADIUS_M } from '@/analysis/odds';
 import { ovalFromMoments } from '@/analysis/ovals';
 import { sampleCovariance2, summarizeInPlace } from '@/analysis/statistics';
 import type { FieldSummary } from '@/analysis/statistics';
@@ -134,6 +135,7 @@ export function analyseGroup(
       oval,
       predictionOval,
       strays: listed,
+      odds: { fairway: { widthM: DEFAULT_FAIRWAY_WIDTH_M, p: null }, green: { radiusM: DEFAULT_GREEN_RADIUS_M, carryM: null, p: null } },
     },
     kept,
     columns,

@@ -1,5 +1,7 @@
 import type { Shot, ShotField } from '@/analysis/fields';
-import type { HeadToHead } from '@/analysis/head-to-head';
+import type { FieldMargins, HeadToHead } from '@/analysis/head-to-head';
+import type { OnTargetOdds } from '@/analysis/odds';
+import type { UnitSystem } from '@/analysis/units';
 import type { LadderRung } from '@/analysis/ladder';
 import type { Oval } from '@/analysis/ovals';
 import type { FieldSummary } from '@/analysis/statistics';
@@ -33,6 +35,18 @@ export interface SessionOptions {
   measured?: readonly Shot[];
   /** Per club, the build the ladder uses; clubs not listed pool all their builds. */
   chosenBuild?: Record<string, string | null>;
+  /** The player's bag clubs, for the ladder's neighbours (default: clubs a set holds side by side). */
+  bagClubs?: readonly string[];
+  /** The shop's margins per field (canonical units); fields not given keep the defaults. */
+  margins?: Partial<FieldMargins>;
+  /** Units of the words (the head-to-head's summary); default imperial. */
+  units?: UnitSystem;
+  /**
+   * On-target odds: fairway width and green radius (default 30 yd and 12 yd), and the green's
+   * carry per club (default: the median carry of the club's kept shots, all builds together, so
+   * builds are judged at the same target).
+   */
+  odds?: { fairwayWidthM?: number; greenRadiusM?: number; targetCarryM?: Record<string, number> };
 }
 
 /** One stray as the session reports it: the row, its kind and the reason in plain words. */
@@ -62,6 +76,8 @@ export interface GroupAnalysis {
   oval: SessionOval | null;
   predictionOval: SessionOval | null;
   strays: SessionStray[];
+  /** The chances of the next shot: a fairway and a green (predictive distribution). */
+  odds: OnTargetOdds;
 }
 
 /** The whole session's analysis. JSON-able; canonical units. */

@@ -50,7 +50,7 @@ export function HeadToHeadSection({ builds, a, b, onChange, headToHead, loading,
             {fields.map((f) => {
               const d = headToHead.fields[f]!;
               const clear = d.p < 0.05;
-              const more = headToHead.shotsNeeded[f];
+              const more = d.shotsNeeded;
               const u = f === 'smashFactor' ? '' : ` ${unitText(f, units)}`;
               return (
                 <View key={f} style={styles.row}>

@@ -38,8 +38,10 @@ export type LadderGap = {
   /** "12 yd" or "5 yd · tight". */
   text: string;
   flag: GapFlag;
-  /** "4° loft" or "8° loft · wide"; null when a loft is unknown. */
+  /** "4° loft" or "8° loft · wide"; "clubs between not hit" when the two are not neighbours; null otherwise. */
   loftText: string | null;
+  /** The two clubs are neighbours (gaps are flagged only between neighbours). */
+  neighbours: boolean;
   loftFlag: LoftStepFlag;
 };
 
@@ -57,7 +59,7 @@ export type LadderGeometry = {
 };
 
 export const LADDER_ROW_PX = 44;
-export const LADDER_MARGIN = { top: 8, bottom: 36, labelColumn: 64, gapColumn: 104, right: 4 } as const;
+export const LADDER_MARGIN = { top: 8, bottom: 36, labelColumn: 104, gapColumn: 112, right: 4 } as const;
 
 /** The word that goes with a carry-gap flag, so a flag is never told by colour alone. */
 export const GAP_FLAG_WORDS: Readonly<Record<Exclude<GapFlag, null>, string>> = {
@@ -78,14 +80,12 @@ export function gapFlagWord(flag: GapFlag): string | null {
 }
 
 /**
- * A club's short name for a chart row: "Driver", "3 wood", "4 hybrid", "7 iron", "PW", "56°". O(1).
- * @example shortClubLabel('W56') // => '56°'
+ * A club's name for a chart row, in full: "Driver", "3 wood", "7 iron", "Pitching wedge",
+ * "56° wedge"; an unknown club as written. O(1).
+ * @example shortClubLabel('W56') // => '56° wedge'
  */
 export function shortClubLabel(code: string): string {
-  const info = clubInfo(code);
-  if (!info) return code;
-  if (info.kind !== 'wedge') return info.label;
-  return /^W\d\d$/.test(code) ? `${code.slice(1)}°` : code;
+  return clubInfo(code)?.label ?? code;
 }
 
 /**
@@ -146,7 +146,12 @@ export function ladderChartGeometry(input: LadderChartInput): LadderGeometry {
     const word = gapFlagWord(r.gapFlag);
     const gapText = `${formatNumber(d(r.gapToNextM))} ${unit}`;
     const loftWord = r.loftStepFlag === null ? null : LOFT_FLAG_WORDS[r.loftStepFlag];
-    const loftText = r.loftStepToNextDeg === null ? null : `${formatSigned(r.loftStepToNextDeg, Number.isInteger(r.loftStepToNextDeg) ? 0 : 1)}° loft${loftWord ? ` · ${loftWord}` : ''}`;
+    const neighbours = r.neighbourToNext !== false;
+    const loftText = !neighbours
+      ? 'clubs between not hit'
+      : r.loftStepToNextDeg === null
+        ? null
+        : `${formatSigned(r.loftStepToNextDeg, Number.isInteger(r.loftStepToNextDeg) ? 0 : 1)}° loft${loftWord ? ` · ${loftWord}` : ''}`;
     const boundary = plot.top + (i + 1) * LADDER_ROW_PX;
     gaps.push({
       from: r.club,
@@ -158,6 +163,7 @@ export function ladderChartGeometry(input: LadderChartInput): LadderGeometry {
       flag: r.gapFlag,
       loftText,
       loftFlag: r.loftStepFlag,
+      neighbours,
     });
   }
   return {

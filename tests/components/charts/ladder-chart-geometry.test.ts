@@ -13,6 +13,7 @@ function rung(club: string, medianM: number, gapToNextM: number | null, extra: P
     carryQ3M: medianM + 3,
     carrySdM: 4,
     gapToNextM,
+    neighbourToNext: gapToNextM !== null,
     gapFlag: gapToNextM === null ? null : classifyCarryGap(gapToNextM, 'iron', 'iron'),
     loftDeg: null,
     loftStepToNextDeg: null,
@@ -31,7 +32,7 @@ describe('ladderChartGeometry', () => {
     ]);
     const g = ladderChartGeometry({ rungs, units: 'metric', widthPx: 390 });
     expect(g.rows.map((r) => r.club)).toEqual(['7I', '8I', 'PW']);
-    expect(g.rows.map((r) => r.label)).toEqual(['7 iron', '8 iron', 'PW']);
+    expect(g.rows.map((r) => r.label)).toEqual(['7 iron', '8 iron', 'Pitching wedge']);
     for (let i = 1; i < g.rows.length; i++) {
       expect(g.rows[i].y).toBeGreaterThan(g.rows[i - 1].y);
       expect(g.rows[i].medianX).toBeLessThan(g.rows[i - 1].medianX);
@@ -112,7 +113,7 @@ describe('ladderChartGeometry', () => {
 });
 
 describe('shortClubLabel', () => {
-  it('shortClubLabel names woods and irons in words and wedges by code or loft', () => {
-    expect(['DR', '3W', '4H', '7I', 'PW', 'W56', 'XX'].map(shortClubLabel)).toEqual(['Driver', '3 wood', '4 hybrid', '7 iron', 'PW', '56°', 'XX']);
+  it('shortClubLabel names every club in full words, never by code', () => {
+    expect(['DR', '3W', '4H', '7I', 'PW', 'W56', 'XX'].map(shortClubLabel)).toEqual(['Driver', '3 wood', '4 hybrid', '7 iron', 'Pitching wedge', '56° wedge', 'XX']);
   });
 });
