@@ -12,6 +12,7 @@ import { fittingsRouter } from './routes/fittings';
 import { healthRouter } from './routes/health';
 import { playersRouter } from './routes/players';
 import { recipesRouter } from './routes/recipes';
+import { shopMarginsRouter } from './routes/shop-margins';
 import { shotsRouter } from './routes/shots';
 import { teamRouter } from './routes/team';
 import type { CommitHooks } from './services/bay-files';
@@ -44,11 +45,12 @@ export function createApp({ sequelize, config, mailer, serveWeb = false, log, co
   api.use('/health', healthRouter(sequelize));
   api.use(authRouter(config, mailer ?? createMailer(config.mail.smtpUrl, config.mail.from)));
   // Everything below needs a signed-in user; each service checks role and shop again.
-  api.use(['/players', '/fittings', '/team', '/recipes', '/bay-files', '/shots', '/builds'], authenticate(config));
+  api.use(['/players', '/fittings', '/team', '/recipes', '/bay-files', '/shots', '/builds', '/shop'], authenticate(config));
   api.use('/players', playersRouter());
   api.use('/fittings', fittingsRouter());
   api.use('/team', teamRouter());
   api.use('/recipes', recipesRouter());
+  api.use('/shop', shopMarginsRouter());
   api.use(bayFilesRouter(sequelize, config, commitHooks));
   api.use(shotsRouter(sequelize));
   api.use(apiNotFound);

@@ -1,3 +1,4 @@
+import { fromCanonical, type UnitSystem } from '@/analysis/units';
 import type { StrayFlag, StrayKind, StrayShot } from './find-strays';
 
 /** The fields a stray's reason writes with a unit the user chooses. */
@@ -9,6 +10,19 @@ export type StrayValueFormatter = (value: number, field: StrayUnitField) => stri
 /** Canonical units: whole metres ("148 m") and m/s to 0.1 ("58.1 m/s"); the default. */
 export const formatCanonical: StrayValueFormatter = (value, field) =>
   field === 'ballSpeed' ? `${value.toFixed(1)} m/s` : `${Math.round(value)} m`;
+
+/**
+ * Values in a user's units: whole yards or metres, mph or km/h to 0.1. O(1).
+ * @example strayFormatterFor('imperial')(9.144, 'carry') // => '10 yd'
+ */
+export function strayFormatterFor(units: UnitSystem): StrayValueFormatter {
+  return (value, field) => {
+    if (field === 'ballSpeed') {
+      return units === 'imperial' ? `${fromCanonical(value, 'mph', 'ballSpeed').toFixed(1)} mph` : `${fromCanonical(value, 'km/h', 'ballSpeed').toFixed(1)} km/h`;
+    }
+    return units === 'imperial' ? `${fromCanonical(value, 'yd', field).toFixed(0)} yd` : `${value.toFixed(0)} m`;
+  };
+}
 
 function signed(x: number, digits: number): string {
   const text = Math.abs(x).toFixed(digits);

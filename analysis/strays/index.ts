@@ -6,7 +6,7 @@ export { madFloor, offlineMadFloor, STRAY_FLOORS } from './stray-floors';
 export type { ScoredField } from './stray-floors';
 export { findStrays, groundDistanceLimit, MIN_SHOTS_FOR_SCORE, MIN_SHOTS_FOR_GROUND } from './find-strays';
 export type { StrayFlag, StrayKind, StrayRule, StrayShot, StrayInput } from './find-strays';
-export { describeStray, describeStrayFlag, formatCanonical, STRAY_KIND_WORDS } from './describe-stray';
+export { describeStray, describeStrayFlag, formatCanonical, STRAY_KIND_WORDS, strayFormatterFor } from './describe-stray';
 export type { StrayUnitField, StrayValueFormatter } from './describe-stray';
 export { isShotKept } from './stray-decisions';
 export type { StrayDecision } from './stray-decisions';

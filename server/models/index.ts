@@ -6,9 +6,10 @@ import { PasswordReset } from './password-reset';
 import { Player } from './player';
 import { Recipe } from './recipe';
 import { Shop } from './shop';
+import { ShopMargins } from './shop-margins';
 import { User } from './user';
 
-export { BayFile, Build, Fitting, PasswordReset, Player, Recipe, Shop, User };
+export { BayFile, Build, Fitting, PasswordReset, Player, Recipe, Shop, ShopMargins, User };
 
 /** Registers every model and association on one Sequelize instance. */
 export function initModels(sequelize: Sequelize): void {
@@ -20,6 +21,7 @@ export function initModels(sequelize: Sequelize): void {
   Recipe.initModel(sequelize);
   Build.initModel(sequelize);
   PasswordReset.initModel(sequelize);
+  ShopMargins.initModel(sequelize);
 
   Shop.hasMany(User, { foreignKey: 'shopId' });
   User.belongsTo(Shop, { foreignKey: 'shopId', as: 'shop' });
@@ -40,4 +42,6 @@ export function initModels(sequelize: Sequelize): void {
   Shop.hasMany(Recipe, { foreignKey: 'shopId' });
   Recipe.belongsTo(Shop, { foreignKey: 'shopId' });
   Recipe.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
+  ShopMargins.belongsTo(Shop, { foreignKey: 'shopId' });
+  ShopMargins.belongsTo(User, { foreignKey: 'updatedBy', as: 'updater' });
 }

@@ -6,3 +6,4 @@ export * from './fittings';
 export * from './team';
 export * from './bay-files';
 export * from './analysis';
+export * from './shop-margins';

@@ -1,4 +1,4 @@
-import { describeStray, describeStrayFlag, formatCanonical } from '@/analysis/strays';
+import { describeStray, describeStrayFlag, formatCanonical, strayFormatterFor } from '@/analysis/strays';
 
 const YD = 0.9144; // NIST SP 811 (2008), Appendix B: 1 yd = 0.9144 m exactly
 const MPH = 0.44704; // NIST SP 811: 1 mph = 0.44704 m/s exactly
@@ -61,5 +61,15 @@ describe('describeStray', () => {
       ],
     });
     expect(text).toBe("Mishit: smash factor 1.20, far below this group's 1.33 (modified z −4.0); carry 112 m, far short of this group's 148 m (modified z −5.2)");
+  });
+});
+
+describe('strayFormatterFor', () => {
+  // NIST SP 811 (2008), Appendix B: 1 yd = 0.9144 m, 1 mph = 0.44704 m/s, 1 km/h = 1/3.6 m/s (exact).
+  it('strayFormatterFor writes yards and mph, or metres and km/h', () => {
+    expect(strayFormatterFor('imperial')(91.44, 'carry')).toBe('100 yd');
+    expect(strayFormatterFor('imperial')(44.704, 'ballSpeed')).toBe('100.0 mph');
+    expect(strayFormatterFor('metric')(91.44, 'offline')).toBe('91 m');
+    expect(strayFormatterFor('metric')(10, 'ballSpeed')).toBe('36.0 km/h');
   });
 });
