@@ -3,15 +3,19 @@
  * screen and visits the main pages at phone (390 × 844) and wide (1280 × 800) sizes.
  * Needs a running server (npm start). Images go to .scratch/screenshots/ (ignored).
  * Run: BASE_URL=http://127.0.0.1:8090 node --import tsx scripts/screenshots.ts
+ * ONLY=fitter (or owner, player, signed-out) takes one role's pictures only.
  */
 import { execSync } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
-import { chromium, type Page } from 'playwright-core';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
 
 const BASE = process.env.BASE_URL ?? 'http://127.0.0.1:8080';
 const OUT = path.resolve(__dirname, '../.scratch/screenshots');
 const PASSWORD = 'ovalyard-demo'; // demo data (fixtures/demo/scenario.json)
+
+/** Which roles' pictures to take (ONLY=fitter…); all by default. */
+const wants = (role: string) => !process.env.ONLY || process.env.ONLY.split(',').includes(role);
 
 const SIZES = [
   { name: 'phone', width: 390, height: 844 },
@@ -33,6 +37,44 @@ async function shot(page: Page, name: string): Promise<void> {
   console.log('  ', name);
 }
 
+/** Scrolls the page's scrolling container until `text` (a heading) is at the top, then a shot. */
+async function shotAtHeading(page: Page, name: string, heading: string): Promise<void> {
+  const target = page.getByRole('heading', { name: heading, exact: true }).first();
+  await target.waitFor({ timeout: 30_000 });
+  await target.evaluate((el) => el.scrollIntoView({ block: 'start' }));
+  await shot(page, name);
+}
+
+/** The fitting page's views (decide, head-to-head, odds, course; shots; ladder; builds; session). */
+async function fittingViews(page: Page, s: string): Promise<void> {
+  await page.getByRole('heading', { name: /where the shots land/ }).first().waitFor({ timeout: 30_000 });
+  await shot(page, `${s}-21-fitting`);
+  await page.getByRole('radio', { name: '7 iron' }).click();
+  await shotAtHeading(page, `${s}-24-head-to-head`, 'Head-to-head');
+  await page.getByText(/^Overall: /).first().waitFor({ timeout: 30_000 }).catch(() => undefined);
+  await page.getByRole('img', { name: /minus/ }).first().evaluate((el) => el.scrollIntoView({ block: 'start' }));
+  await shot(page, `${s}-24b-head-to-head-plot`);
+  await page.getByLabel('Head-to-head table').evaluate((el) => el.scrollIntoView({ block: 'start' }));
+  await shot(page, `${s}-24c-head-to-head-table`);
+  await shotAtHeading(page, `${s}-25-odds`, 'On target');
+  await page.getByLabel('Altitude').fill('1600');
+  await page.getByLabel('Temperature').fill('30');
+  await page.getByRole('button', { name: 'Show at the course' }).click();
+  await page.getByText('What changed at the course').waitFor({ timeout: 30_000 });
+  await page.getByText('What changed at the course').evaluate((el) => el.scrollIntoView({ block: 'center' }));
+  await shot(page, `${s}-26-course`);
+  await page.getByRole('tab', { name: 'Shots' }).click();
+  await page.getByLabel('Groups table').waitFor({ timeout: 30_000 });
+  await shot(page, `${s}-27-groups`);
+  await shotAtHeading(page, `${s}-28-shot-table`, 'Every shot');
+  await page.getByRole('tab', { name: 'Ladder' }).click();
+  await page.getByRole('img', { name: /^Ladder:/ }).waitFor({ timeout: 30_000 });
+  await shot(page, `${s}-29-ladder`);
+  await page.getByRole('tab', { name: 'Session' }).click();
+  await page.getByRole('heading', { name: 'Bay files' }).waitFor({ timeout: 30_000 });
+  await shot(page, `${s}-29b-session`);
+}
+
 async function main(): Promise<void> {
   fs.mkdirSync(OUT, { recursive: true });
   const browser = await chromium.launch({
@@ -45,9 +87,12 @@ async function main(): Promise<void> {
   try {
     for (const size of SIZES) {
       const s = size.name;
+      let context: BrowserContext;
+      let page: Page;
       // signed out, and a failed sign-in
-      let context = await browser.newContext({ viewport: size });
-      let page = await context.newPage();
+      if (wants('signed-out')) {
+      context = await browser.newContext({ viewport: size });
+      page = await context.newPage();
       await page.goto(`${BASE}/sign-in`);
       await shot(page, `${s}-01-sign-in`);
       await page.getByLabel('E-mail').fill('oskar@larchmere.example');
@@ -56,8 +101,10 @@ async function main(): Promise<void> {
       await page.getByText('do not match').waitFor();
       await shot(page, `${s}-02-sign-in-error`);
       await context.close();
+      }
 
       // fitter
+      if (wants('fitter')) {
       context = await browser.newContext({ viewport: size });
       page = await context.newPage();
       await signIn(page, 'oskar@larchmere.example');
@@ -81,7 +128,7 @@ async function main(): Promise<void> {
       await shot(page, `${s}-20-fittings`);
       await page.getByRole('link').filter({ hasText: 'Nell Tarrant' }).first().click();
       await page.waitForURL(/\/fittings\/[0-9a-f-]+$/);
-      await shot(page, `${s}-21-fitting`);
+      await fittingViews(page, s);
       await page.getByRole('button', { name: 'Edit', exact: true }).click();
       await shot(page, `${s}-22-fitting-edit`);
       await page.goto(`${BASE}/fittings/new`);
@@ -89,8 +136,10 @@ async function main(): Promise<void> {
       await page.goto(`${BASE}/account`);
       await shot(page, `${s}-30-account-fitter`);
       await context.close();
+      }
 
       // owner
+      if (wants('owner')) {
       context = await browser.newContext({ viewport: size });
       page = await context.newPage();
       await signIn(page, 'hedda@larchmere.example');
@@ -98,9 +147,14 @@ async function main(): Promise<void> {
       await shot(page, `${s}-40-team`);
       await page.goto(`${BASE}/team/new`);
       await shot(page, `${s}-41-team-new`);
+      await page.goto(`${BASE}/team/margins`);
+      await page.getByLabel('Carry', { exact: true }).waitFor({ timeout: 30_000 });
+      await shot(page, `${s}-42-margins`);
       await context.close();
+      }
 
       // player
+      if (wants('player')) {
       context = await browser.newContext({ viewport: size });
       page = await context.newPage();
       await signIn(page, 'nell.tarrant@example.net');
@@ -108,6 +162,7 @@ async function main(): Promise<void> {
       await page.goto(`${BASE}/account`);
       await shot(page, `${s}-51-account-player`);
       await context.close();
+      }
     }
   } finally {
     await browser.close();

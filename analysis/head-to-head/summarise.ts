@@ -86,16 +86,15 @@ export function overallVerdict(h: Parts): Overall {
 
 /** Decimals of an amount in its display unit. */
 function decimals(field: ShotField, unit: string): number {
-  if (field === 'smashFactor') return 2;
-  if (unit === 'rpm') return 0;
-  if (unit === 'yd' || unit === 'm' || unit === 'ft') return field === 'offline' ? 1 : 0;
+  if (field === 'smashFactor') return 3;
+  if (unit === 'rpm' || unit === 'ft') return 0;
   return 1;
 }
 
 /**
  * A canonical amount (a difference, a spread) in the user's units with its unit: "6 yd",
- * "1.5 mph", "1.2°", "250 rpm", "0.02". O(1).
- * @example formatAmount('carry', 5.4864, 'imperial') // => '6 yd'
+ * "1.5 mph", "1.2°", "250 rpm", "0.020". O(1).
+ * @example formatAmount('carry', 5.4864, 'imperial') // => '6.0 yd'
  */
 export function formatAmount(field: ShotField, value: number, units: UnitSystem): string {
   const unit = displayUnits(units)[field];
@@ -150,7 +149,7 @@ function spreadClause(field: 'offline' | 'carry', s: SpreadComparison, units: Un
 /**
  * A head-to-head in one sentence in the user's units, build A as the subject: each clear
  * difference of means, each clear difference of spread (95% of shots within ±1.96 sd), then
- * what is left: "Birch carries 6 yd farther (clear); left–right spread ±38 vs ±25 yd, wider
+ * what is left: "Birch carries 6 yd farther (clear); left–right spread ±38.0 vs ±25.0 yd, wider
  * (clear); the rest is equivalent or not yet clear." Then the overall verdict. O(fields).
  * @example summariseHeadToHead(h, 'imperial') // => "Birch carries 6 yd farther (clear); … Overall: …"
  */

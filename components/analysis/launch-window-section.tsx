@@ -2,14 +2,14 @@ import { useMemo } from 'react';
 import { View } from 'react-native';
 import { optimiseLaunch, type AirConditions } from '@/analysis/flight';
 import type { UnitSystem } from '@/analysis/units';
-import type { PlotShot } from '@/server/schemas';
+import type { AnalysisShot } from './plot-shots';
 import { LaunchWindowPlot } from '../charts';
 import { AppText } from '../ui/app-text';
 import { Card } from '../ui/card';
 import { formatField } from '../format-field';
 import { useWidth } from './use-width';
 
-type LaunchWindowSectionProps = { shots: readonly PlotShot[]; ballSpeedMps: number | null; air: AirConditions; units: UnitSystem };
+type LaunchWindowSectionProps = { shots: readonly AnalysisShot[]; ballSpeedMps: number | null; air: AirConditions; units: UnitSystem };
 
 /**
  * For the club's average ball speed, the launch angle and spin that carry farthest in the

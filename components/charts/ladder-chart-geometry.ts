@@ -38,7 +38,7 @@ export type LadderGap = {
   /** "12 yd" or "5 yd · tight". */
   text: string;
   flag: GapFlag;
-  /** "4° loft" or "8° loft · wide"; "clubs between not hit" when the two are not neighbours; null otherwise. */
+  /** "4° loft" or "8° loft · wide"; "clubs skipped" when the two are not neighbours (a club between was not hit); null otherwise. */
   loftText: string | null;
   /** The two clubs are neighbours (gaps are flagged only between neighbours). */
   neighbours: boolean;
@@ -148,7 +148,7 @@ export function ladderChartGeometry(input: LadderChartInput): LadderGeometry {
     const loftWord = r.loftStepFlag === null ? null : LOFT_FLAG_WORDS[r.loftStepFlag];
     const neighbours = r.neighbourToNext !== false;
     const loftText = !neighbours
-      ? 'clubs between not hit'
+      ? 'clubs skipped'
       : r.loftStepToNextDeg === null
         ? null
         : `${formatSigned(r.loftStepToNextDeg, Number.isInteger(r.loftStepToNextDeg) ? 0 : 1)}° loft${loftWord ? ` · ${loftWord}` : ''}`;

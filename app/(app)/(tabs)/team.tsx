@@ -21,6 +21,7 @@ export default function TeamScreen() {
     <Screen>
       <AppText tone="muted">The people who fit at {me.shop.name}. A deactivated fitter can no longer sign in.</AppText>
       <Button title="Add fitter" variant="secondary" compact onPress={() => router.push('/team/new')} />
+      <Button title="Decision margins" variant="secondary" compact onPress={() => router.push('/team/margins')} />
       <TeamList selfId={me.id} />
     </Screen>
   );

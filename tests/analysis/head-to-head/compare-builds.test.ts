@@ -91,7 +91,7 @@ describe('compareBuilds', () => {
       { club: 'DR', build: 'Ash', columns: { offline: tight, carry: withMoments(10, 230 * YD, 6 * YD) } },
     );
     expect(h.spread.fields.offline!.verdict).toBe('clear');
-    expect(h.summary).toMatch(/^Birch carries 6 yd farther \(clear\); left–right spread ±\d+\.\d vs ±\d+\.\d yd, wider \(clear\); the rest is equivalent or not yet clear\. Overall: a trade-off: Birch is longer; Ash is tighter left to right\.$/);
+    expect(h.summary).toMatch(/^Birch carries 6\.0 yd farther \(clear\); left–right spread ±\d+\.\d vs ±\d+\.\d yd, wider \(clear\); the rest is equivalent or not yet clear\. Overall: a trade-off: Birch is longer; Ash is tighter left to right\.$/);
     expect(h.overall.verdict).toBe('tradeOff');
   });
 
