@@ -4,8 +4,7 @@ import { BALL_MASS_LIMIT_KG, impactSpeedRatio } from './impact-speed-ratio';
 /**
  * The most springy face the rules allow: the older coefficient-of-restitution limit 0.830 of
  * the R&A / USGA rules of equipment (today a characteristic-time limit of 239 µs + 18 µs
- * tolerance, which is about the same spring). Irons and wedges are less springy; using the
- * limit for every club keeps the bound generous.
+ * tolerance, which is about the same spring). Used for drivers, woods and hybrids.
  */
 export const RESTITUTION_LIMIT = 0.83;
 
@@ -17,18 +16,20 @@ export const RESTITUTION_LIMIT = 0.83;
 export const SMASH_MEASUREMENT_ALLOWANCE = 0.03;
 
 /**
- * The heaviest head and how far below its typical loft a club may meet the ball (a strong-lofted
- * set and a forward-leaning shaft both take loft off), per kind of club. Common practice, no
- * source (from memory): heads weigh about 195–210 g (driver), 210–230 g (woods), 225–255 g
- * (hybrids), 240–290 g (irons) and 290–310 g (wedges); the heaviest is taken. A driver's loft
- * is taken as 6° at impact at the least.
+ * Per kind of club: the heaviest head, how far below its typical loft a club may meet the ball
+ * (a strong-lofted set and a forward-leaning shaft both take loft off), and the restitution.
+ * Common practice, no source (from memory): heads weigh about 195–210 g (driver), 210–230 g
+ * (woods), 225–255 g (hybrids), 240–290 g (irons) and 290–310 g (wedges); the heaviest is
+ * taken. A driver's loft is taken as 6° at impact at the least. Irons and wedges meet the
+ * ball at lower speeds along the face's normal, where a ball is springier: 0.86 is taken for
+ * them (from memory, generous), above the rules' 0.830 for the faces of woods.
  */
-export const IMPACT_CLUBS: Readonly<Record<Exclude<ClubKind, 'putter'>, { headMassKg: number; loftBelowTypicalDeg: number; leastLoftDeg: number }>> = {
-  driver: { headMassKg: 0.21, loftBelowTypicalDeg: 4.5, leastLoftDeg: 6 },
-  wood: { headMassKg: 0.23, loftBelowTypicalDeg: 5, leastLoftDeg: 8 },
-  hybrid: { headMassKg: 0.255, loftBelowTypicalDeg: 8, leastLoftDeg: 10 },
-  iron: { headMassKg: 0.29, loftBelowTypicalDeg: 12, leastLoftDeg: 10 },
-  wedge: { headMassKg: 0.31, loftBelowTypicalDeg: 14, leastLoftDeg: 25 },
+export const IMPACT_CLUBS: Readonly<Record<Exclude<ClubKind, 'putter'>, { headMassKg: number; loftBelowTypicalDeg: number; leastLoftDeg: number; restitution: number }>> = {
+  driver: { headMassKg: 0.21, loftBelowTypicalDeg: 4.5, leastLoftDeg: 6, restitution: RESTITUTION_LIMIT },
+  wood: { headMassKg: 0.23, loftBelowTypicalDeg: 5, leastLoftDeg: 8, restitution: RESTITUTION_LIMIT },
+  hybrid: { headMassKg: 0.255, loftBelowTypicalDeg: 8, leastLoftDeg: 10, restitution: RESTITUTION_LIMIT },
+  iron: { headMassKg: 0.29, loftBelowTypicalDeg: 14, leastLoftDeg: 10, restitution: 0.86 },
+  wedge: { headMassKg: 0.31, loftBelowTypicalDeg: 18, leastLoftDeg: 20, restitution: 0.86 },
 };
 
 /** The impact bound on a club's smash factor and how it was worked out. */
@@ -41,13 +42,15 @@ export interface SmashFactorLimit {
   /** The loft at impact the bound assumes, degrees. */
   loftDeg: number;
   headMassKg: number;
+  restitution: number;
 }
 
 /**
  * The highest smash factor a club can give, from the impact model (Penner 2003; see
  * impactSpeedRatio) at the most favourable impact for the club: the rules' restitution limit
- * 0.830, the heaviest ball the rules allow (45.93 g), the heaviest head of its kind, and its
- * typical loft less what strong lofts and shaft lean can take off (IMPACT_CLUBS); then
+ * 0.830 (more for irons and wedges), the heaviest ball the rules allow (45.93 g), the heaviest
+ * head of its kind, and its typical loft less what strong lofts and shaft lean can take off
+ * (IMPACT_CLUBS); then
  * SMASH_MEASUREMENT_ALLOWANCE on top. A club Ovalyard does not know gets the most generous
  * bound of all kinds (square impact, heaviest head). Putters have no bound (null): a putt's
  * speeds are too small for the ratio to mean much. O(1).
@@ -59,16 +62,20 @@ export function smashFactorLimit(club: string): SmashFactorLimit | null {
   if (info?.kind === 'putter') return null;
   let headMassKg: number;
   let loftDeg: number;
+  let restitution: number;
   if (info) {
     const model = IMPACT_CLUBS[info.kind as Exclude<ClubKind, 'putter'>];
     headMassKg = model.headMassKg;
     loftDeg = Math.max(model.leastLoftDeg, info.typicalLoftDeg - model.loftBelowTypicalDeg);
+    restitution = model.restitution;
   } else {
-    headMassKg = Math.max(...Object.values(IMPACT_CLUBS).map((c) => c.headMassKg));
+    const all = Object.values(IMPACT_CLUBS);
+    headMassKg = Math.max(...all.map((c) => c.headMassKg));
+    restitution = Math.max(...all.map((c) => c.restitution));
     loftDeg = 0;
   }
-  const ideal = impactSpeedRatio({ restitution: RESTITUTION_LIMIT, ballMassKg: BALL_MASS_LIMIT_KG, headMassKg, loftDeg });
-  return { limit: ideal * (1 + SMASH_MEASUREMENT_ALLOWANCE), ideal, kind: info?.kind ?? null, loftDeg, headMassKg };
+  const ideal = impactSpeedRatio({ restitution, ballMassKg: BALL_MASS_LIMIT_KG, headMassKg, loftDeg });
+  return { limit: ideal * (1 + SMASH_MEASUREMENT_ALLOWANCE), ideal, kind: info?.kind ?? null, loftDeg, headMassKg, restitution };
 }
 
 /**

@@ -153,38 +153,54 @@ function scoreStrikes(columns: Record<ScoredField, ArrayLike<number> | undefined
       const s = values ? fieldScores(values, excluded, field) : null;
       if (s) scores[field] = s;
     }
-    result = Array.from({ length: n }, () => []);
+    // Per field, each shot's z on its worse side (lower for smash, ball speed and carry, either
+    // way for launch) and whether it is far below the median by share; worked out once per pass.
+    const worse: Partial<Record<ScoredField, Float64Array>> = {};
+    const farBelow: Partial<Record<ScoredField, Uint8Array>> = {};
+    for (const field of SCORED_FIELDS) {
+      const s = scores[field];
+      if (!s) continue;
+      const w = new Float64Array(n);
+      const far = new Uint8Array(n);
+      const share = FAR_BELOW_SHARE[field];
+      const values = columns[field]!;
+      for (let i = 0; i < n; i++) {
+        const z = s.z[i];
+        w[i] = !Number.isFinite(z) ? 0 : field === 'launchAngle' ? Math.abs(z) : Math.max(0, -z);
+        far[i] = share !== undefined && values[i] < (1 - share) * s.median[i] ? 1 : 0;
+      }
+      worse[field] = w;
+      farBelow[field] = far;
+    }
+    const zero = new Float64Array(n);
+    const none = new Uint8Array(n);
+    const smashW = worse.smashFactor ?? zero;
+    const ballW = worse.ballSpeed ?? zero;
+    const launchW = worse.launchAngle ?? zero;
+    const carryW = worse.carry ?? zero;
+    const smashFar = farBelow.smashFactor ?? none;
+    const carryFar = farBelow.carry ?? none;
+    result = new Array(n);
     const next = Uint8Array.from(misread);
     for (let i = 0; i < n; i++) {
-      // z on the worse side of each field: lower for smash, ball speed and carry, either way for launch
-      const worse = (field: ScoredField) => {
-        const z = scores[field]?.z[i];
-        if (z === undefined || !Number.isFinite(z)) return 0;
-        return field === 'launchAngle' ? Math.abs(z) : Math.max(0, -z);
-      };
-      const speed = Math.max(worse('smashFactor'), worse('ballSpeed'));
-      const launch = worse('launchAngle');
-      const carry = worse('carry');
+      result[i] = [];
+      const speed = Math.max(smashW[i], ballW[i]);
+      const launch = launchW[i];
+      const carry = carryW[i];
       const signs = (speed > SUPPORTING_Z_LIMIT ? 1 : 0) + (launch > SUPPORTING_Z_LIMIT ? 1 : 0) + (carry > SUPPORTING_Z_LIMIT ? 1 : 0);
-      const farBelow = (field: ScoredField) => {
-        const share = FAR_BELOW_SHARE[field];
-        const value = columns[field]?.[i] ?? Number.NaN;
-        const median = scores[field]?.median[i] ?? Number.NaN;
-        return share !== undefined && value < (1 - share) * median;
-      };
       // Carry alone speaks for the strike only when nothing else was measured, or when far short:
       // short carry from a normal strike is the flight (a curve), the player's dispersion.
       const mishit =
         speed > MODIFIED_Z_LIMIT ||
         launch > MODIFIED_Z_LIMIT ||
         signs >= 2 ||
-        farBelow('smashFactor') ||
-        farBelow('carry') ||
+        smashFar[i] === 1 ||
+        carryFar[i] === 1 ||
         (carry > MODIFIED_Z_LIMIT && !hasStrike);
       if (!mishit) continue;
       for (const field of SCORED_FIELDS) {
         const s = scores[field];
-        if (!s || !(worse(field) > SUPPORTING_Z_LIMIT || farBelow(field))) continue;
+        if (!s || !(worse[field]![i] > SUPPORTING_Z_LIMIT || farBelow[field]![i] === 1)) continue;
         result[i].push({ rule: field, kind: 'mishit', value: columns[field]![i], median: s.median[i], modifiedZ: s.z[i], madUsed: s.mad[i], floored: s.floored[i] === 1 });
       }
       next[i] = 1;
@@ -280,7 +296,7 @@ export function findStrays(input: StrayInput): StrayShot[] {
     carry: input.carryM,
     launchAngle: input.launchAngleDeg,
   };
-  const scored = scoreStrikes(columns, flags.map((f) => (f ? 1 : 0)), n);
+  const scored = scoreStrikes(columns, Array.from({ length: n }, (_, i) => (flags[i] ? 1 : 0)), n);
   for (let i = 0; i < n; i++) for (const f of scored[i]) add(i, f);
 
   if (input.offlineM && input.carryM) {

@@ -20,7 +20,7 @@ describe('importBayFile with the impact bound', () => {
   });
 
   it('importBayFile names the smash factor column when the file gives it', () => {
-    const csv = ['Club,Smash,Carry (yds)', '7 Iron,1.33,150', '7 Iron,1.56,151'].join('\n');
+    const csv = ['Club,Smash,Carry (yds)', 'Sand wedge,1.15,90', 'Sand wedge,1.42,91'].join('\n');
     const r = importBayFile(csv);
     expect(r.rejected).toEqual([expect.objectContaining({ row: 2, column: 'Smash' })]);
   });
