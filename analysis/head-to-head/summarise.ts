@@ -26,23 +26,50 @@ const DECIDING_WORDS: Readonly<Record<DecidingField, string>> = {
 
 type Parts = Pick<HeadToHead, 'a' | 'b' | 'fields' | 'spread'>;
 
+const NUMBER_WORDS = ['no', 'one', 'two', 'three', 'four', 'five'];
+
 /** A build's name in sentences: its label, else the club's code. */
 export function buildName(ref: { club: string; build: string | null }): string {
   return ref.build ?? ref.club;
 }
 
-/** Which deciding fields favour A (+1), B (−1), neither clearly (0); null when not compared. */
-function deciding(h: Parts): { field: DecidingField; favours: 1 | -1 | 0; verdict: FieldComparison['verdict']; shotsNeeded: number | null }[] {
-  const out: ReturnType<typeof deciding> = [];
+type DecidingRow = {
+  field: DecidingField;
+  /** After the correction: the build this field clearly favours, else 0. */
+  favours: 1 | -1 | 0;
+  /** Before it: the build a clear verdict of this field favours. */
+  leans: 1 | -1 | 0;
+  verdict: FieldComparison['verdict'];
+  p: number;
+  shotsNeeded: number | null;
+};
+
+/**
+ * Which deciding fields favour A (+1), B (−1), neither clearly (0). A clear verdict counts for
+ * the overall only when it survives Holm's step-down correction across the deciding fields
+ * compared (family-wise 5%): with five chances, one "clear" difference between two equal builds
+ * would otherwise turn up about one time in five. Holm, "A simple sequentially rejective
+ * multiple test procedure", Scand. J. Statist. 6 (1979) 65–70.
+ */
+function deciding(h: Parts): DecidingRow[] {
+  const out: DecidingRow[] = [];
   for (const field of ['carry', 'total', 'ballSpeed'] as const) {
     const c = h.fields[field];
-    if (c) out.push({ field, favours: c.verdict === 'clear' ? (c.diff > 0 ? 1 : -1) : 0, verdict: c.verdict, shotsNeeded: c.shotsNeeded });
+    const side = c && c.verdict === 'clear' ? (c.diff > 0 ? 1 : -1) : 0;
+    if (c) out.push({ field, favours: side, leans: side, verdict: c.verdict, p: c.p, shotsNeeded: c.shotsNeeded });
   }
   for (const [field, key] of [['offlineSpread', 'offline'], ['carrySpread', 'carry']] as const) {
     const s = h.spread.fields[key];
     // tighter is better: a smaller deviation for A favours A
-    if (s) out.push({ field, favours: s.verdict === 'clear' ? (s.diff < 0 ? 1 : -1) : 0, verdict: s.verdict, shotsNeeded: s.shotsNeeded });
+    const side = s && s.verdict === 'clear' ? (s.diff < 0 ? 1 : -1) : 0;
+    if (s) out.push({ field, favours: side, leans: side, verdict: s.verdict, p: s.p, shotsNeeded: s.shotsNeeded });
   }
+  const order = [...out].sort((a, b) => a.p - b.p);
+  let rejecting = true;
+  order.forEach((row, k) => {
+    rejecting = rejecting && row.p <= 0.05 / (order.length - k);
+    if (!rejecting) row.favours = 0;
+  });
   return out;
 }
 
@@ -54,9 +81,10 @@ function listWords(words: string[]): string {
 /**
  * The overall verdict of a head-to-head, by a rule of ours on the fields a fitter decides a
  * build by: longer carry (and total), more ball speed, tighter left–right and carry spread.
- * A build is better when it is clearly better on at least one of them and clearly worse on
- * none; a trade-off when each is clearly better somewhere; equivalent when every one compared
- * is equivalent; otherwise not yet clear, with the shots that would settle it. O(1).
+ * A build is better when it is clearly better on at least one of them (clear, and still so
+ * after Holm's correction across them) and clearly worse on none; a trade-off when each is
+ * clearly better somewhere; equivalent when every one compared is equivalent; otherwise not yet
+ * clear, with the shots that would settle it. O(1).
  * @example overallVerdict(h).text // => "Overall: Birch is the better build: longer and tighter left to right."
  */
 export function overallVerdict(h: Parts): Overall {
@@ -66,14 +94,29 @@ export function overallVerdict(h: Parts): Overall {
   const nameA = buildName(h.a);
   const nameB = buildName(h.b);
   const words = (fields: DecidingField[]) => listWords(fields.map((f) => DECIDING_WORDS[f]));
+  // Clear on their own but not after the correction: said as "perhaps".
+  const perhaps = (side: 1 | -1) => {
+    const fields = rows.filter((r) => r.leans === side && r.favours === 0).map((r) => r.field);
+    return fields.length ? ` (perhaps also ${words(fields)})` : '';
+  };
   if (betterA.length > 0 && betterB.length === 0) {
-    return { verdict: 'a', betterA, betterB, text: `Overall: ${nameA} is the better build: ${words(betterA)}.` };
+    return { verdict: 'a', betterA, betterB, text: `Overall: ${nameA} is the better build: ${words(betterA)}${perhaps(1)}.` };
   }
   if (betterB.length > 0 && betterA.length === 0) {
-    return { verdict: 'b', betterA, betterB, text: `Overall: ${nameB} is the better build: ${words(betterB)}.` };
+    return { verdict: 'b', betterA, betterB, text: `Overall: ${nameB} is the better build: ${words(betterB)}${perhaps(-1)}.` };
   }
   if (betterA.length > 0) {
     return { verdict: 'tradeOff', betterA, betterB, text: `Overall: a trade-off: ${nameA} is ${words(betterA)}; ${nameB} is ${words(betterB)}.` };
+  }
+  const leaning = rows.filter((r) => r.leans !== 0);
+  if (leaning.length > 0) {
+    const side = (r: DecidingRow) => `${r.leans === 1 ? nameA : nameB} looks ${DECIDING_WORDS[r.field]}`;
+    return {
+      verdict: 'unclear',
+      betterA,
+      betterB,
+      text: `Overall: not yet clear: ${listWords(leaning.map(side))}, but with ${NUMBER_WORDS[rows.length] ?? rows.length} things weighed that could still be chance; a few more shots per build will tell.`,
+    };
   }
   if (rows.length > 0 && rows.every((r) => r.verdict === 'equivalent')) {
     return { verdict: 'equivalent', betterA, betterB, text: `Overall: no difference that matters between ${nameA} and ${nameB}.` };

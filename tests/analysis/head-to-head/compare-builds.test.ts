@@ -87,12 +87,24 @@ describe('compareBuilds', () => {
     const wide = [-30, 22, -15, 28, -25, 18, 5, -8, 30, -20].map((x) => x * YD);
     const tight = [-8, 6, -4, 7, -6, 5, 1, -2, 8, -5].map((x) => x * YD);
     const h = compareBuilds(
-      { club: 'DR', build: 'Birch', columns: { offline: wide, carry: withMoments(10, 236 * YD, 6 * YD) } },
-      { club: 'DR', build: 'Ash', columns: { offline: tight, carry: withMoments(10, 230 * YD, 6 * YD) } },
+      { club: 'DR', build: 'Birch', columns: { offline: wide, carry: withMoments(10, 238 * YD, 4 * YD) } },
+      { club: 'DR', build: 'Ash', columns: { offline: tight, carry: withMoments(10, 230 * YD, 4 * YD) } },
     );
     expect(h.spread.fields.offline!.verdict).toBe('clear');
-    expect(h.summary).toMatch(/^Birch carries 6\.0 yd farther \(clear\); left–right spread ±\d+\.\d vs ±\d+\.\d yd, wider \(clear\); the rest is equivalent or not yet clear\. Overall: a trade-off: Birch is longer; Ash is tighter left to right\.$/);
+    expect(h.summary).toMatch(/^Birch carries 8\.0 yd farther \(clear\); left–right spread ±\d+\.\d vs ±\d+\.\d yd, wider \(clear\); the rest is equivalent or not yet clear\. Overall: a trade-off: Birch is longer; Ash is tighter left to right\.$/);
     expect(h.overall.verdict).toBe('tradeOff');
+  });
+
+  // Holm (1979) across the deciding fields: one clear difference among several could be chance.
+  it('compareBuilds with only a marginal carry difference keeps the overall verdict not yet clear', () => {
+    const h = compareBuilds(
+      { club: 'DR', build: 'Birch', columns: { carry: withMoments(10, 236 * YD, 6 * YD), ballSpeed: withMoments(10, 60, 1), offline: withMoments(10, 0, 8) } },
+      { club: 'DR', build: 'Ash', columns: { carry: withMoments(10, 230 * YD, 6 * YD), ballSpeed: withMoments(10, 60, 1), offline: withMoments(10, 0, 8) } },
+    );
+    expect(h.fields.carry!.verdict).toBe('clear');
+    expect(h.fields.carry!.p).toBeGreaterThan(0.05 / 4);
+    expect(h.overall.verdict).toBe('unclear');
+    expect(h.overall.text).toMatch(/^Overall: not yet clear: Birch looks longer, but with \w+ things weighed that could still be chance/);
   });
 
   it('compareBuilds of an oval twice as wide in B gives an area ratio of 1/4', () => {
