@@ -65,10 +65,10 @@ export function PinnedTable({ label, pinnedTitle, pinnedWidthPx, columns, rows, 
               {columns.map((c) => {
                 const text = (
                   <>
-                    <AppText variant="label" style={[styles.headText, styles.right]} numberOfLines={2}>
+                    <AppText variant="label" style={[styles.headText, c.alignLeft ? styles.left : styles.right]} numberOfLines={2}>
                       {`${c.title}${c.sort === 'asc' ? ' ▲' : c.sort === 'desc' ? ' ▼' : ''}`}
                     </AppText>
-                    {c.unit ? <AppText variant="caption" tone="muted" style={styles.right}>{c.unit}</AppText> : null}
+                    {c.unit ? <AppText variant="caption" tone="muted" style={c.alignLeft ? styles.left : styles.right}>{c.unit}</AppText> : null}
                   </>
                 );
                 return c.sort !== undefined && onSort ? (
@@ -112,6 +112,7 @@ const styles = StyleSheet.create({
   headText: { color: colors.textMuted },
   headCell: { minHeight: layout.minTouchPx, justifyContent: 'center', paddingHorizontal: space.sm },
   right: { textAlign: 'right' },
+  left: { textAlign: 'left' },
   rowLine: { flexDirection: 'row', alignItems: 'center' },
   line: { borderBottomWidth: 1, borderBottomColor: colors.border },
   valueCell: { paddingHorizontal: space.sm, alignItems: 'flex-end', justifyContent: 'center' },

@@ -18,6 +18,8 @@ import { DERIVED_MARK, shotCellText, shotStatusText } from './shot-table-cells';
 type ShotTableProps = { fittingId: string; clubs: readonly string[]; units: UnitSystem };
 
 const PAGE = 50;
+/** Shown first, where a phone sees them without scrolling; the rest follow in canonical order. */
+const FIRST: readonly ShotField[] = ['carry', 'offline', 'ballSpeed'];
 const ALL = '';
 
 /**
@@ -36,16 +38,20 @@ export function ShotTable({ fittingId, clubs, units }: ShotTableProps) {
   const page = query.data;
   const sortOf = (key: string) => (params.sort === key ? params.dir : null);
   const fieldTitle = (f: ShotField) => FIELD_LABELS[f];
+  const fieldColumn = (f: ShotField) => ({
+    key: f,
+    title: fieldTitle(f),
+    unit: `${unitText(f, units)}${SIDE_FIELDS.has(f) ? `${unitText(f, units) ? ' ' : ''}L/R` : ''}`,
+    widthPx: Math.max(88, fieldTitle(f).length * 8 + 24),
+    sort: sortOf(f),
+  });
+  const first = FIRST.filter((f) => page.fields.includes(f));
+  const rest = page.fields.filter((f) => !FIRST.includes(f));
   const columns = [
-    { key: 'row', title: 'Row', widthPx: 64, sort: sortOf('row') },
+    { key: 'row', title: 'Row', widthPx: 56, sort: sortOf('row') },
+    ...first.map(fieldColumn),
     { key: 'stray', title: 'Stray · figures', widthPx: 150, sort: sortOf('stray'), alignLeft: true },
-    ...page.fields.map((f) => ({
-      key: f,
-      title: fieldTitle(f),
-      unit: `${unitText(f, units)}${SIDE_FIELDS.has(f) ? `${unitText(f, units) ? ' ' : ''}L/R` : ''}`,
-      widthPx: Math.max(88, fieldTitle(f).length * 8 + 24),
-      sort: sortOf(f),
-    })),
+    ...rest.map(fieldColumn),
   ];
   const rows = page.shots.map((s) => ({
     key: String(s.id),
@@ -58,8 +64,9 @@ export function ShotTable({ fittingId, clubs, units }: ShotTableProps) {
     ),
     cells: [
       <AppText key="row">{String(s.row)}</AppText>,
+      ...first.map((f) => <AppText key={f}>{shotCellText(s, f, units)}</AppText>),
       <AppText key="stray" variant="caption" numberOfLines={2} style={{ color: s.inFigures ? colors.text : colors.caution }}>{shotStatusText(s)}</AppText>,
-      ...page.fields.map((f) => <AppText key={f}>{shotCellText(s, f, units)}</AppText>),
+      ...rest.map((f) => <AppText key={f}>{shotCellText(s, f, units)}</AppText>),
     ],
   }));
   const last = Math.min(page.total, page.offset + page.shots.length);
