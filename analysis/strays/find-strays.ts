@@ -138,15 +138,19 @@ function fieldScores(values: ArrayLike<number>, excluded: Uint8Array, field: Sco
 }
 
 /**
- * The mishit rules on one group (see findStrays), in two passes: the second scores every shot
- * against the shots the first did not call mishits or misreads, so two mishits in a small
- * group do not hide each other. O(n²) for groups up to LEAVE_ONE_OUT_MAX_SHOTS, O(n) above.
+ * The mishit rules on one group (see findStrays); in groups up to LEAVE_ONE_OUT_MAX_SHOTS in two
+ * passes: the second scores every shot against the shots the first did not call mishits or
+ * misreads, so two mishits in a small group do not hide each other. O(n²) for those small
+ * groups, O(n) above.
  */
 function scoreStrikes(columns: Record<ScoredField, ArrayLike<number> | undefined>, misread: readonly number[], n: number): StrayFlag[][] {
   let excluded = Uint8Array.from(misread);
   let result: StrayFlag[][] = [];
   const hasStrike = [columns.smashFactor, columns.ballSpeed].some((c) => c !== undefined && countFinite(c) >= MIN_SHOTS_FOR_SCORE);
-  for (let pass = 0; pass < 2; pass++) {
+  // A second look only in small groups, where two mishits can hide each other; in a large group
+  // a few mishits barely move the median and the MAD.
+  const passes = n <= LEAVE_ONE_OUT_MAX_SHOTS ? 2 : 1;
+  for (let pass = 0; pass < passes; pass++) {
     const scores: Partial<Record<ScoredField, NonNullable<ReturnType<typeof fieldScores>>>> = {};
     for (const field of SCORED_FIELDS) {
       const values = columns[field];
