@@ -80,6 +80,7 @@ export const api = {
   get: <T>(path: string, query?: QueryParams) => apiRequest<T>('GET', path, { query }),
   post: <T>(path: string, body?: unknown) => apiRequest<T>('POST', path, { body }),
   patch: <T>(path: string, body: unknown) => apiRequest<T>('PATCH', path, { body }),
+  put: <T>(path: string, body: unknown) => apiRequest<T>('PUT', path, { body }),
 };
 
 /** The message to show for any thrown value. */

@@ -103,9 +103,9 @@ export interface AnalyseOutput extends SessionAnalysis {
   rejected: { row: number; reason: string }[];
 }
 
-export function analyseText(text: string, args: Pick<Args, 'recipe' | 'all' | 'level' | 'compare'>): AnalyseOutput {
+export function analyseText(text: string, args: Pick<Args, 'recipe' | 'all' | 'level' | 'compare'> & { units?: UnitSystem }): AnalyseOutput {
   const result = importBayFile(text, { recipe: args.recipe, fillFlight: (v: ShotValues) => fillFlightFields(v) });
-  const analysis = analyseSession(result.shots, { level: args.level, includeStrays: args.all, compare: args.compare });
+  const analysis = analyseSession(result.shots, { level: args.level, includeStrays: args.all, compare: args.compare, units: args.units });
   return {
     rows: result.rows,
     imported: result.shots.length,
@@ -131,6 +131,8 @@ function table(out: AnalyseOutput, units: UnitSystem): string {
     [`offline ${u.offline}`, (g) => `${show('offline', g.fields.offline?.mean)} ±${show('offline', g.fields.offline?.sd)}`],
     [`oval ${u.carry}`, (g) => (g.oval ? `${show('carry', g.oval.semiMajor)}×${show('carry', g.oval.semiMinor)} @${g.oval.angleDeg.toFixed(0)}°` : '—')],
     ['strays', (g) => String(g.strays.length)],
+    ['fairway', (g) => (g.odds.fairway.p == null ? '—' : `${Math.round(100 * g.odds.fairway.p)}%`)],
+    ['green', (g) => (g.odds.green.p == null ? '—' : `${Math.round(100 * g.odds.green.p)}%`)],
   ];
   const rows = [cols.map((c) => c[0]), ...out.groups.map((g) => cols.map((c) => c[1](g)))];
   const widths = cols.map((_, i) => Math.max(...rows.map((r) => r[i].length)));
@@ -141,13 +143,18 @@ function table(out: AnalyseOutput, units: UnitSystem): string {
   for (const r of out.rejected.slice(0, 10)) extra.push(`  row ${r.row}: ${r.reason}`);
   if (out.headToHead) {
     const h = out.headToHead;
-    extra.push('', `Head-to-head: A = ${h.a.club} ${h.a.build ?? '—'}, B = ${h.b.club} ${h.b.build ?? '—'} (A − B, 95% CI, Welch p)`);
+    extra.push('', `Head-to-head: A = ${h.a.club} ${h.a.build ?? '—'}, B = ${h.b.club} ${h.b.build ?? '—'} (A − B, 95% CI, margin, verdict)`);
+    const f = (field: ShotField, v: number) => (field === 'smashFactor' ? v.toFixed(3) : fromCanonical(v, u[field], field).toFixed(1));
+    const words = (verdict: string, more: number | null) => (verdict === 'unclear' ? `not yet clear${more === null ? '' : ` (about ${more} more shots each)`}` : verdict);
     for (const [field, d] of Object.entries(h.fields) as [ShotField, NonNullable<(typeof h.fields)[ShotField]>][]) {
       const unit = field === 'smashFactor' ? '' : ` ${u[field]}`;
-      const f = (v: number) => (field === 'smashFactor' ? v.toFixed(3) : fromCanonical(v, u[field], field).toFixed(1));
-      extra.push(`  ${field.padEnd(16)} ${f(d.diff).padStart(8)}${unit}  [${f(d.ci95[0])}, ${f(d.ci95[1])}]  p ${d.p.toFixed(3)}`);
+      extra.push(`  ${field.padEnd(16)} ${f(field, d.diff).padStart(8)}${unit}  [${f(field, d.ci95[0])}, ${f(field, d.ci95[1])}]  ±${f(field, d.margin)}  ${words(d.verdict, d.shotsNeeded)}`);
     }
-    extra.push(`  oval area ratio A/B ${h.ovalAreaRatio == null ? '—' : h.ovalAreaRatio.toFixed(2)}`);
+    for (const [field, s] of Object.entries(h.spread.fields) as [ShotField, NonNullable<(typeof h.spread.fields)[ShotField]>][]) {
+      if (field !== 'offline' && field !== 'carry') continue;
+      extra.push(`  ${`${field} spread`.padEnd(16)} sd ${f(field, s.sdA)} vs ${f(field, s.sdB)} ${u[field]}, ratio ${s.ratio.toFixed(2)}, Brown–Forsythe p ${s.p.toFixed(3)}  ${words(s.verdict, s.shotsNeeded)}`);
+    }
+    extra.push(`  oval area ratio A/B ${h.ovalAreaRatio == null ? '—' : h.ovalAreaRatio.toFixed(2)}`, `  ${h.summary}`);
   }
   if (out.ladder.length) {
     extra.push('', 'Ladder (median carry, gap to the next club):');
@@ -192,7 +199,7 @@ function main(argv: string[]): number {
       }
       for (const a of suggestMapping(text).ambiguous.filter((x) => x.kind === 'sign')) process.stderr.write(`analyse: note: "${a.column}": ${a.reason}\n`);
     }
-    const out = analyseText(text, args);
+    const out = analyseText(text, { ...args, units: args.units });
     process.stdout.write(args.json ? `${JSON.stringify(out)}\n` : `${table(out, args.units)}\n`);
     return 0;
   } catch (err) {

@@ -3,15 +3,19 @@
  * screen and visits the main pages at phone (390 × 844) and wide (1280 × 800) sizes.
  * Needs a running server (npm start). Images go to .scratch/screenshots/ (ignored).
  * Run: BASE_URL=http://127.0.0.1:8090 node --import tsx scripts/screenshots.ts
+ * ONLY=fitter (or owner, player, signed-out) takes one role's pictures only.
  */
 import { execSync } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
-import { chromium, type Locator, type Page } from 'playwright-core';
+import { chromium, type BrowserContext, type Locator, type Page } from 'playwright-core';
 
 const BASE = process.env.BASE_URL ?? 'http://127.0.0.1:8080';
 const OUT = path.resolve(__dirname, '../.scratch/screenshots');
 const PASSWORD = 'ovalyard-demo'; // demo data (fixtures/demo/scenario.json)
+
+/** Which roles' pictures to take (ONLY=fitter…); all by default. */
+const wants = (role: string) => !process.env.ONLY || process.env.ONLY.split(',').includes(role);
 
 const SIZES = [
   { name: 'phone', width: 390, height: 844 },
@@ -42,6 +46,44 @@ async function shotAt(page: Page, name: string, text: string | RegExp | Locator)
 
 const DEMO_DIR = path.resolve(__dirname, '../fixtures/demo');
 
+/** Scrolls the page's scrolling container until `text` (a heading) is at the top, then a shot. */
+async function shotAtHeading(page: Page, name: string, heading: string): Promise<void> {
+  const target = page.getByRole('heading', { name: heading, exact: true }).first();
+  await target.waitFor({ timeout: 30_000 });
+  await target.evaluate((el) => el.scrollIntoView({ block: 'start' }));
+  await shot(page, name);
+}
+
+/** The fitting page's views (decide, head-to-head, odds, course; shots; ladder; builds; session). */
+async function fittingViews(page: Page, s: string): Promise<void> {
+  await page.getByRole('heading', { name: /where the shots land/ }).first().waitFor({ timeout: 30_000 });
+  await shot(page, `${s}-21-fitting`);
+  await page.getByRole('radio', { name: '7 iron' }).click();
+  await shotAtHeading(page, `${s}-24-head-to-head`, 'Head-to-head');
+  await page.getByText(/^Overall: /).first().waitFor({ timeout: 30_000 }).catch(() => undefined);
+  await page.getByRole('img', { name: /minus/ }).first().evaluate((el) => el.scrollIntoView({ block: 'start' }));
+  await shot(page, `${s}-24b-head-to-head-plot`);
+  await page.getByLabel('Head-to-head table').evaluate((el) => el.scrollIntoView({ block: 'start' }));
+  await shot(page, `${s}-24c-head-to-head-table`);
+  await shotAtHeading(page, `${s}-25-odds`, 'On target');
+  await page.getByLabel('Altitude').fill('1600');
+  await page.getByLabel('Temperature').fill('30');
+  await page.getByRole('button', { name: 'Show at the course' }).click();
+  await page.getByText('What changed at the course').waitFor({ timeout: 30_000 });
+  await page.getByText('What changed at the course').evaluate((el) => el.scrollIntoView({ block: 'center' }));
+  await shot(page, `${s}-26-course`);
+  await page.getByRole('tab', { name: 'Shots' }).click();
+  await page.getByLabel('Groups table').waitFor({ timeout: 30_000 });
+  await shot(page, `${s}-27-groups`);
+  await shotAtHeading(page, `${s}-28-shot-table`, 'Every shot');
+  await page.getByRole('tab', { name: 'Ladder' }).click();
+  await page.getByRole('img', { name: /^Ladder:/ }).waitFor({ timeout: 30_000 });
+  await shot(page, `${s}-29-ladder`);
+  await page.getByRole('tab', { name: 'Session' }).click();
+  await page.getByRole('heading', { name: 'Bay files' }).waitFor({ timeout: 30_000 });
+  await shot(page, `${s}-29b-session`);
+}
+
 async function main(): Promise<void> {
   fs.mkdirSync(OUT, { recursive: true });
   const browser = await chromium.launch({
@@ -54,9 +96,12 @@ async function main(): Promise<void> {
   try {
     for (const size of SIZES) {
       const s = size.name;
+      let context: BrowserContext;
+      let page: Page;
       // signed out, and a failed sign-in
-      let context = await browser.newContext({ viewport: size });
-      let page = await context.newPage();
+      if (wants('signed-out')) {
+      context = await browser.newContext({ viewport: size });
+      page = await context.newPage();
       await page.goto(`${BASE}/sign-in`);
       await shot(page, `${s}-01-sign-in`);
       await page.getByLabel('E-mail').fill('oskar@larchmere.example');
@@ -71,8 +116,10 @@ async function main(): Promise<void> {
       await page.goto(`${BASE}/no-such-page`);
       await shot(page, `${s}-04-not-found-signed-out`);
       await context.close();
+      }
 
       // fitter
+      if (wants('fitter')) {
       context = await browser.newContext({ viewport: size });
       page = await context.newPage();
       await signIn(page, 'oskar@larchmere.example');
@@ -107,12 +154,14 @@ async function main(): Promise<void> {
       await page.goto(`${BASE}/fittings`);
       await page.getByRole('link').filter({ hasText: 'Nell Tarrant' }).first().click();
       await page.waitForURL(/\/fittings\/[0-9a-f-]+$/);
-      await shot(page, `${s}-21-fitting`);
-      const fittingUrl = page.url();
+      await fittingViews(page, s);
+      const fittingUrl = page.url().split('?')[0];
+      await page.getByRole('tab', { name: 'Builds' }).click();
       const buildsHeading = page.getByRole('heading', { name: 'Builds', exact: true });
       await buildsHeading.waitFor();
       await shotAt(page, `${s}-21b-fitting-builds`, buildsHeading);
-      await page.getByRole('button', { name: 'Edit', exact: true }).last().click();
+      await page.getByRole('tab', { name: 'Session' }).click();
+      await page.getByRole('button', { name: 'Edit', exact: true }).first().click();
       await shot(page, `${s}-22-fitting-edit`);
       await page.goto(`${BASE}/fittings/new`);
       await shot(page, `${s}-23-fitting-new`);
@@ -141,16 +190,18 @@ async function main(): Promise<void> {
         await page.getByRole('button', { name: 'Import the bay file' }).click();
         await page.getByText(/shots imported/).waitFor({ timeout: 30_000 });
         await shot(page, `${s}-29-import-result`);
-        await page.goto(`${BASE}/fittings/${into}`);
-        const ladder = page.getByRole('heading', { name: 'Ladder', exact: true });
+        await page.goto(`${BASE}/fittings/${into}?view=ladder`);
+        const ladder = page.getByRole('img', { name: /^Ladder:/ });
         await ladder.waitFor({ timeout: 30_000 });
-        await shotAt(page, `${s}-29b-fitting-ladder`, ladder);
+        await shotAt(page, `${s}-29c-imported-ladder`, ladder);
       }
       await page.goto(`${BASE}/account`);
       await shot(page, `${s}-30-account-fitter`);
       await context.close();
+      }
 
       // owner
+      if (wants('owner')) {
       context = await browser.newContext({ viewport: size });
       page = await context.newPage();
       await signIn(page, 'hedda@larchmere.example');
@@ -175,9 +226,14 @@ async function main(): Promise<void> {
       await page.getByRole('link', { name: `Recipe Bay 2 export (${s})` }).click();
       await page.waitForURL(/\/recipes\/[0-9a-f-]+$/);
       await shot(page, `${s}-43-recipe`, true);
+      await page.goto(`${BASE}/team/margins`);
+      await page.getByLabel('Carry', { exact: true }).waitFor({ timeout: 30_000 });
+      await shot(page, `${s}-42-margins`);
       await context.close();
+      }
 
       // player
+      if (wants('player')) {
       context = await browser.newContext({ viewport: size });
       page = await context.newPage();
       await signIn(page, 'nell.tarrant@example.net');
@@ -190,6 +246,7 @@ async function main(): Promise<void> {
       await page.goto(`${BASE}/nothing-here`);
       await shot(page, `${s}-53-not-found`);
       await context.close();
+      }
     }
   } finally {
     await browser.close();

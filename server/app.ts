@@ -17,6 +17,7 @@ import { fittingsRouter } from './routes/fittings';
 import { healthRouter } from './routes/health';
 import { playersRouter } from './routes/players';
 import { recipesRouter } from './routes/recipes';
+import { shopMarginsRouter } from './routes/shop-margins';
 import { shotsRouter } from './routes/shots';
 import { specSheetsRouter } from './routes/spec-sheets';
 import { teamRouter } from './routes/team';
@@ -69,11 +70,12 @@ export function createApp({ sequelize, config, mailer, serveWeb = false, log, co
   api.use('/demo', demoRouter());
   api.use(authRouter(config, mail));
   // Everything below needs a signed-in user; each service checks role and shop again.
-  api.use(['/players', '/fittings', '/team', '/recipes', '/bay-files', '/shots', '/builds', '/bag-clubs', '/spec-sheets', '/workshop-settings'], authenticate(config));
+  api.use(['/players', '/fittings', '/team', '/recipes', '/bay-files', '/shots', '/builds', '/bag-clubs', '/spec-sheets', '/workshop-settings', '/shop'], authenticate(config));
   api.use('/players', playersRouter());
   api.use('/fittings', fittingsRouter());
   api.use('/team', teamRouter());
   api.use('/recipes', recipesRouter());
+  api.use('/shop', shopMarginsRouter());
   api.use(bayFilesRouter(sequelize, config, commitHooks));
   api.use(shotsRouter(sequelize, new AnalysisCache(config.analysisCacheBytes)));
   api.use(bagsRouter(sequelize));

@@ -18,8 +18,8 @@ export interface ChoiceFigures {
   /** Against the club's other build with the most shots, if any. */
   rival: { label: string; carryDiffM: number; carryDiffCi95M: [number, number]; offlineSdRatio: number | null } | null;
   /**
-   * On-target odds and the head-to-head's one-sentence summary: filled on the server by
-   * `decisionFiguresHook` once the analysis gives them; null until then.
+   * On-target odds of the next shot (fairway, green) and the head-to-head's one-sentence summary
+   * against the rival; null when the analysis cannot give them (too few shots, no rival).
    */
   onTargetOdds: { fairwayWidthM: number; fairway: number; greenRadiusM: number; green: number } | null;
   summary: string | null;

@@ -1,8 +1,12 @@
 import { SHOT_FIELDS } from '@/analysis/fields';
 import type { ShotField } from '@/analysis/fields';
-import { meanVariance, sampleCovariance2, varianceRatioTest, welchTTest } from '@/analysis/statistics';
+import { meanVariance, sampleCovariance2, spreadDifference, welchTTest } from '@/analysis/statistics';
 import type { SampleMoments } from '@/analysis/statistics';
-import { moreShotsNeeded } from './shots-needed';
+import type { UnitSystem } from '@/analysis/units';
+import { resolveMargins, type FieldMargins } from './margins';
+import { shotsToSettle } from './shots-needed';
+import { overallVerdict, summariseHeadToHead, type Overall } from './summarise';
+import { verdictOf, type Verdict } from './verdict';
 
 /** The kept shots of one build as aligned columns (index i is one shot; NaN = missing). */
 export interface BuildSample {
@@ -11,7 +15,7 @@ export interface BuildSample {
   columns: Partial<Record<ShotField, ArrayLike<number>>>;
 }
 
-/** Difference of means A − B for one field, Welch. JSON-able. */
+/** Difference of means A − B for one field (Welch), with its verdict. JSON-able; canonical units. */
 export interface FieldComparison {
   meanA: number;
   meanB: number;
@@ -20,23 +24,43 @@ export interface FieldComparison {
   t: number;
   df: number;
   p: number;
+  /** The smallest difference that matters for this field (the shop's, else the default). */
+  margin: number;
+  verdict: Verdict;
+  /** For an unclear verdict: about how many more shots per build would settle it; else null. */
+  shotsNeeded: number | null;
 }
 
-/** Spread of one field in A against B: variance-ratio F test. */
+export const SPREAD_METHOD = 'Brown–Forsythe (Levene on deviations from the median)';
+
+/**
+ * Spread of one field in A against B: sds, their ratio, and the Brown–Forsythe test, whose two
+ * means (mean absolute deviation from each build's median) are compared with an interval and
+ * the field's margin, so spread gets a verdict by the same rule as the means. JSON-able.
+ */
 export interface SpreadComparison {
   sdA: number;
   sdB: number;
-  /** sA²/sB² */
-  f: number;
+  /** sdA / sdB. */
+  ratio: number;
+  /** Brown–Forsythe p. */
+  p: number;
+  verdict: Verdict;
+  method: typeof SPREAD_METHOD;
+  w: number;
   df1: number;
   df2: number;
-  /** Two-sided p value. */
-  p: number;
+  /** Mean absolute deviation from the median, A and B. */
+  deviationA: number;
+  deviationB: number;
+  /** deviationA − deviationB and its 95% interval (pooled t; excludes 0 exactly when p < 0.05). */
+  diff: number;
+  ci95: [number, number];
+  margin: number;
+  shotsNeeded: number | null;
 }
 
-export const SPREAD_METHOD = 'variance-ratio F test, two-sided';
-
-/** Two builds side by side. JSON-able. */
+/** Two builds side by side. JSON-able; canonical units, words in `units`. */
 export interface HeadToHead {
   a: { club: string; build: string | null };
   b: { club: string; build: string | null };
@@ -44,12 +68,10 @@ export interface HeadToHead {
   spread: { method: typeof SPREAD_METHOD; fields: Partial<Record<ShotField, SpreadComparison>> };
   /** Oval area of A over B (the same at every level); null without two ovals of some size. */
   ovalAreaRatio: number | null;
-  /**
-   * Per field with p ≥ 0.05: about how many more shots per build would settle the difference at
-   * power 0.8 and α 0.05 (normal approximation, pooled variance); null when already clear (p < 0.05)
-   * or when the means are equal.
-   */
-  shotsNeeded: Partial<Record<ShotField, number | null>>;
+  /** Which build is better on the fields that decide (see overallVerdict). */
+  overall: Overall;
+  /** One sentence in the user's units, e.g. "Birch carries 6 yd farther (clear); …". */
+  summary: string;
 }
 
 function finiteValues(values: ArrayLike<number>): Float64Array {
@@ -59,10 +81,9 @@ function finiteValues(values: ArrayLike<number>): Float64Array {
   return out.subarray(0, n);
 }
 
-function moments(values: ArrayLike<number>): SampleMoments | null {
-  const finite = finiteValues(values);
-  if (finite.length < 2) return null;
-  const mv = meanVariance(finite);
+function moments(values: Float64Array): SampleMoments | null {
+  if (values.length < 2) return null;
+  const mv = meanVariance(values);
   return { n: mv.n, mean: mv.mean, sd: Math.sqrt(mv.variance) };
 }
 
@@ -87,42 +108,85 @@ function ovalAreaFactor(sample: BuildSample): number | null {
   return Math.sqrt(Math.max(0, c.xx * c.yy - c.xy * c.xy));
 }
 
+function compareSpread(a: Float64Array, b: Float64Array, margin: number, ma: SampleMoments, mb: SampleMoments): SpreadComparison | null {
+  if (a.length < 3 || b.length < 3 || !(mb.sd > 0)) return null;
+  let s;
+  try {
+    s = spreadDifference(a, b, 0.95);
+  } catch (err) {
+    if (err instanceof RangeError) return null; // no spread at all in the deviations
+    throw err;
+  }
+  const verdict = verdictOf(s.ci, margin);
+  return {
+    sdA: ma.sd,
+    sdB: mb.sd,
+    ratio: ma.sd / mb.sd,
+    p: s.p,
+    verdict,
+    method: SPREAD_METHOD,
+    w: s.w,
+    df1: s.df1,
+    df2: s.df2,
+    deviationA: s.meanAbsoluteDeviations[0],
+    deviationB: s.meanAbsoluteDeviations[1],
+    diff: s.diff,
+    ci95: s.ci,
+    margin,
+    shotsNeeded: verdict === 'unclear' ? shotsToSettle({ nA: s.nA, nB: s.nB, sdA: s.pooledSd, sdB: s.pooledSd, diff: s.diff, margin }) : null,
+  };
+}
+
 /**
  * Head-to-head of two builds: for each field both have (at least 2 values each, some spread),
- * both means, A − B with its 95% confidence interval, Welch's t, df and p; the spread of each
- * field by the variance-ratio F test; the ratio of oval areas A/B; and for differences not yet
- * clear (p ≥ 0.05) about how many more shots per build would settle them. O(n) over both.
+ * both means, A − B with its 95% confidence interval (Welch), and the verdict against the
+ * field's margin (equivalent / clear / unclear, with the shots that would settle it); the
+ * spread of each field by the Brown–Forsythe test with the sd ratio and a verdict by the same
+ * rule; the ratio of oval areas A/B; the overall verdict and a one-sentence summary in `units`.
+ * O(n) over both.
  * https://www.itl.nist.gov/div898/handbook/eda/section3/eda353.htm
- * @example compareBuilds(sampleA, sampleB).fields.carry // => { meanA, meanB, diff, ci95, t, df, p }
+ * @example compareBuilds(sampleA, sampleB).fields.carry // => { meanA, meanB, diff, ci95, t, df, p, margin, verdict, shotsNeeded }
  */
-export function compareBuilds(a: BuildSample, b: BuildSample): HeadToHead {
+export function compareBuilds(a: BuildSample, b: BuildSample, options: { margins?: Partial<FieldMargins>; units?: UnitSystem } = {}): HeadToHead {
+  const margins = resolveMargins(options.margins);
   const fields: HeadToHead['fields'] = {};
   const spread: HeadToHead['spread']['fields'] = {};
-  const shotsNeeded: HeadToHead['shotsNeeded'] = {};
   for (const field of SHOT_FIELDS) {
     const ca = a.columns[field];
     const cb = b.columns[field];
     if (!ca || !cb) continue;
-    const ma = moments(ca);
-    const mb = moments(cb);
+    const va = finiteValues(ca);
+    const vb = finiteValues(cb);
+    const ma = moments(va);
+    const mb = moments(vb);
     if (!ma || !mb || !(ma.sd > 0 || mb.sd > 0)) continue;
     const welch = welchTTest(ma, mb, 0.95);
-    fields[field] = { meanA: ma.mean, meanB: mb.mean, diff: welch.diff, ci95: welch.ci, t: welch.t, df: welch.df, p: welch.p };
-    if (mb.sd > 0) {
-      const test = varianceRatioTest(ma, mb);
-      spread[field] = { sdA: ma.sd, sdB: mb.sd, f: test.f, df1: test.df1, df2: test.df2, p: test.p };
-    }
-    shotsNeeded[field] =
-      welch.p < 0.05 ? null : moreShotsNeeded({ nA: ma.n, nB: mb.n, sdA: ma.sd, sdB: mb.sd, diff: welch.diff });
+    const margin = margins[field];
+    const verdict = verdictOf(welch.ci, margin);
+    fields[field] = {
+      meanA: ma.mean,
+      meanB: mb.mean,
+      diff: welch.diff,
+      ci95: welch.ci,
+      t: welch.t,
+      df: welch.df,
+      p: welch.p,
+      margin,
+      verdict,
+      shotsNeeded: verdict === 'unclear' ? shotsToSettle({ nA: ma.n, nB: mb.n, sdA: ma.sd, sdB: mb.sd, diff: welch.diff, margin }) : null,
+    };
+    const s = compareSpread(va, vb, margin, ma, mb);
+    if (s) spread[field] = s;
   }
   const areaA = ovalAreaFactor(a);
   const areaB = ovalAreaFactor(b);
-  return {
+  const partial: Omit<HeadToHead, 'overall' | 'summary'> = {
     a: { club: a.club, build: a.build },
     b: { club: b.club, build: b.build },
     fields,
     spread: { method: SPREAD_METHOD, fields: spread },
     ovalAreaRatio: areaA !== null && areaB !== null && areaB > 0 ? areaA / areaB : null,
-    shotsNeeded,
   };
+  const overall = overallVerdict(partial);
+  return { ...partial, overall, summary: summariseHeadToHead({ ...partial, overall }, options.units ?? 'imperial') };
 }

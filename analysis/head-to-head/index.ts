@@ -1,4 +1,10 @@
 export { compareBuilds, SPREAD_METHOD } from './compare-builds';
 export type { BuildSample, FieldComparison, HeadToHead, SpreadComparison } from './compare-builds';
-export { moreShotsNeeded } from './shots-needed';
-export type { ShotsNeededInput } from './shots-needed';
+export { DEFAULT_MARGINS, resolveMargins } from './margins';
+export type { FieldMargins } from './margins';
+export { verdictOf, VERDICT_WORDS } from './verdict';
+export type { Verdict } from './verdict';
+export { moreShotsNeeded, shotsToSettle } from './shots-needed';
+export type { SettleInput, ShotsNeededInput } from './shots-needed';
+export { buildName, formatAmount, overallVerdict, summariseHeadToHead } from './summarise';
+export type { DecidingField, Overall } from './summarise';

@@ -11,6 +11,8 @@ import { parseClubName } from './club-name';
 import { deriveSlotsInPlace, derivedFields } from './derive-fields';
 import { newSlots, SLOT, SLOT_COUNT, valuesFromSlots } from './shot-slots';
 import { parseHeader } from './header-match';
+import { smashFactorLimit } from '@/analysis/physics';
+import { impactMisreadReason } from './impact-check';
 import { ImportError, type ImportErrorCode } from './import-error';
 import { compileNumberReader, newCellState, quickDecimal, quickDecimalRange, type DecimalMark, type NumberReader } from './number-format';
 import { recipeSchema, type ColumnTarget, type Recipe, type RecipeColumn, type SideNotation } from './recipe';
@@ -67,6 +69,7 @@ export interface ImportResult {
 }
 
 const MIN = SHOT_FIELDS.map((f) => SHOT_LIMITS[f].min);
+const SMASH_SLOT = SLOT.smashFactor;
 const MAX = SHOT_FIELDS.map((f) => SHOT_LIMITS[f].max);
 
 interface ColumnPlan {
@@ -215,6 +218,9 @@ export function importBayFile(input: string, options: ImportOptions = {}): Impor
   warnings.push(...unitWarnings(sampleColumns(merged, sampleRows(detail), readNumber)));
 
   const clubIndex = merged.find((m) => m.field === 'club')?.index ?? -1;
+  const smashHeader = plans.find((p) => p.field === 'smashFactor')?.header ?? null;
+  // the impact bound on smash factor per club code (a misread is rejected; see impact-check.ts)
+  const smashLimits = new Map<string, number>();
   const buildIndexes = merged.filter((m) => m.field === 'build').map((m) => m.index);
   const defaultClub = options.defaultClub ? parseClubName(options.defaultClub) : null;
   if (clubIndex < 0 && !defaultClub) {
@@ -364,6 +370,15 @@ export function importBayFile(input: string, options: ImportOptions = {}): Impor
           return;
         }
       }
+    }
+    let smashLimit = smashLimits.get(code);
+    if (smashLimit === undefined) {
+      smashLimit = smashFactorLimit(code)?.limit ?? Infinity;
+      smashLimits.set(code, smashLimit);
+    }
+    if (slots[SMASH_SLOT] > smashLimit) {
+      rejected.push({ row, line, column: smashHeader ?? undefined, reason: impactMisreadReason(code, slots[SMASH_SLOT])! });
+      return;
     }
     let derived = derivedOf(mask);
     let finalValues = toValues(slots);

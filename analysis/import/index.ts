@@ -22,3 +22,4 @@ export { parseHeader, matchHeaderName, type ParsedHeader } from './header-match'
 export { detectNumberFormat, isFormulaLike, type DecimalMark } from './number-format';
 export { deriveFields } from './derive-fields';
 export { SHOT_LIMITS, FIELD_WORDS, shotValuesSchema, checkLimit, checkShotValues } from './shot-limits';
+export { impactMisreadReason } from './impact-check';

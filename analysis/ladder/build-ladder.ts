@@ -1,6 +1,7 @@
 import { clubInfo, compareClubs } from '@/analysis/clubs';
 import { summarizeInPlace } from '@/analysis/statistics';
 import { classifyCarryGap, classifyLoftStep } from './gap-rules';
+import { areNeighbours } from './neighbours';
 import type { GapFlag, LoftStepFlag } from './gap-rules';
 
 /** The kept carries of one group (club and build). */
@@ -24,6 +25,11 @@ export interface LadderRung {
   carrySdM: number | null;
   /** This club's median carry less the next (shorter) club's; null for the last club. */
   gapToNextM: number | null;
+  /**
+   * Whether the next club is its neighbour (see areNeighbours): gaps and loft steps are flagged
+   * only between neighbours; false for the last club.
+   */
+  neighbourToNext: boolean;
   gapFlag: GapFlag;
   /** Loft of the build(s) used; null when unknown or when the builds differ. */
   loftDeg: number | null;
@@ -38,6 +44,11 @@ export interface LadderOptions {
   chosenBuild?: Record<string, string | null>;
   /** Loft per group, keyed `${club}|${build ?? ''}`. */
   loftByGroup?: Record<string, number>;
+  /**
+   * The player's bag clubs (canonical codes): neighbours are clubs with no bag club between
+   * them. Without it, neighbours are clubs a set would hold next to each other.
+   */
+  neighbours?: readonly string[];
 }
 
 /**
@@ -51,8 +62,10 @@ export function groupKey(club: string, build: string | null): string {
 /**
  * The bag's ladder: per club (putters left out) the carry of the kept shots (median, quartiles,
  * sd) pooled across its builds or from the chosen build, the gap to the next club in bag order,
- * loft steps where lofts are known, and flags for gaps that are too tight or too wide (common
- * practice, see GAP_RULES) and wedge loft steps outside 4–6°. O(n) expected.
+ * loft steps where lofts are known, and — only between neighbours (areNeighbours, or the bag's
+ * clubs given as `neighbours`) — flags for gaps that are too tight or too wide (common practice,
+ * see GAP_RULES) and wedge loft steps outside 4–6°. No "wide" driver to 7-iron gap when the
+ * clubs between were not hit. O(n) expected.
  * @example buildLadder([{ club: '7I', build: null, carryM: [150, 152] }, { club: '8I', build: null, carryM: [140, 141] }])[0].gapToNextM // => 10.5
  */
 export function buildLadder(groups: readonly LadderGroup[], options: LadderOptions = {}): LadderRung[] {
@@ -65,7 +78,7 @@ export function buildLadder(groups: readonly LadderGroup[], options: LadderOptio
     if (list) list.push(group);
     else byClub.set(group.club, [group]);
   }
-  const partial: Omit<LadderRung, 'gapToNextM' | 'gapFlag' | 'loftStepToNextDeg' | 'loftStepFlag'>[] = [];
+  const partial: Omit<LadderRung, 'gapToNextM' | 'neighbourToNext' | 'gapFlag' | 'loftStepToNextDeg' | 'loftStepFlag'>[] = [];
   for (const club of [...byClub.keys()].sort(compareClubs)) {
     const list = byClub.get(club)!;
     let total = 0;
@@ -92,17 +105,19 @@ export function buildLadder(groups: readonly LadderGroup[], options: LadderOptio
   }
   return partial.map((rung, i) => {
     const next = partial[i + 1];
-    if (!next) return { ...rung, gapToNextM: null, gapFlag: null, loftStepToNextDeg: null, loftStepFlag: null };
+    if (!next) return { ...rung, gapToNextM: null, neighbourToNext: false, gapFlag: null, loftStepToNextDeg: null, loftStepFlag: null };
     const kind = clubInfo(rung.club)?.kind ?? null;
     const nextKind = clubInfo(next.club)?.kind ?? null;
     const gapToNextM = rung.carryMedianM - next.carryMedianM;
     const loftStepToNextDeg = rung.loftDeg !== null && next.loftDeg !== null ? next.loftDeg - rung.loftDeg : null;
+    const neighbourToNext = areNeighbours(rung.club, next.club, options.neighbours);
     return {
       ...rung,
       gapToNextM,
-      gapFlag: classifyCarryGap(gapToNextM, kind, nextKind),
+      neighbourToNext,
+      gapFlag: neighbourToNext ? classifyCarryGap(gapToNextM, kind, nextKind) : null,
       loftStepToNextDeg,
-      loftStepFlag: loftStepToNextDeg === null ? null : classifyLoftStep(loftStepToNextDeg, kind, nextKind),
+      loftStepFlag: loftStepToNextDeg === null || !neighbourToNext ? null : classifyLoftStep(loftStepToNextDeg, kind, nextKind),
     };
   });
 }

@@ -4,3 +4,4 @@ export { classifyCarryGap, classifyLoftStep, GAP_RULES, WEDGE_LOFT_STEP } from '
 export type { GapFlag, LoftStepFlag } from './gap-rules';
 export { bagLadder } from './bag-ladder';
 export type { BagLadderClub, BagLadderRung, CarrySource } from './bag-ladder';
+export { areNeighbours, NEIGHBOUR_LOFT_STEP_DEG } from './neighbours';

@@ -1,10 +1,11 @@
 import { SHOT_FIELDS } from '@/analysis/fields';
 import type { ShotField } from '@/analysis/fields';
+import { DEFAULT_FAIRWAY_WIDTH_M, DEFAULT_GREEN_RADIUS_M } from '@/analysis/odds';
 import { ovalFromMoments } from '@/analysis/ovals';
 import { sampleCovariance2, summarizeInPlace } from '@/analysis/statistics';
 import type { FieldSummary } from '@/analysis/statistics';
 import { describeStray, findStrays, isShotKept } from '@/analysis/strays';
-import type { StrayDecision } from '@/analysis/strays';
+import type { StrayDecision, StrayShot, StrayValueFormatter } from '@/analysis/strays';
 import type { GroupAnalysis, SessionStray } from './session-types';
 import type { ShotColumns } from './shot-columns';
 
@@ -27,44 +28,66 @@ function gatherKept(column: Float64Array, kept: Uint8Array, scratch: Float64Arra
 }
 
 /**
- * One group's summaries, ovals and strays. Strays are found on all the group's shots; the
- * fitter's decisions then override, and the statistics use the kept shots. O(n · fields).
+ * The strays of one group's columns (analysis/strays: misreads, mishits, shots for review). O(n).
+ * @example groupStrays(shotColumns(shots)[0]) // => [{ row: 5, index: 4, kind: 'mishit', flags: […] }]
+ */
+export function groupStrays(columns: ShotColumns): StrayShot[] {
+  const { fields, rows } = columns;
+  return findStrays({
+    rows,
+    club: columns.club,
+    carryM: fields.carry,
+    smashFactor: columns.smashFactor,
+    offlineM: fields.offline,
+    ballSpeedMps: fields.ballSpeed,
+    launchAngleDeg: fields.launchAngle,
+  });
+}
+
+/**
+ * One group's summaries, ovals and strays. Strays are found on all the group's shots (or given:
+ * the strays of the measured shots when the figures were carried over to other conditions);
+ * the fitter's decisions then override, and the statistics use the kept shots. A shot flagged
+ * only for review stays in the figures unless dropped. O(n · fields).
  * @param scratch working space of at least 2 × the group's shots (reused across groups)
+ * @param strays the group's strays when decided elsewhere, indexed as `columns`
  * @throws RangeError when level is not in (0, 1) and the group has an oval
  * @example analyseGroup(shotColumns(shots)[0], { level: 0.95, includeStrays: false, decisions: {} }).analysis.kept
  */
 export function analyseGroup(
   columns: ShotColumns,
-  options: { level: number; includeStrays: boolean; decisions: Record<number, StrayDecision>; formatDistance?: (metres: number) => string },
+  options: { level: number; includeStrays: boolean; decisions: Record<number, StrayDecision>; formatValue?: StrayValueFormatter },
   scratch: Float64Array = new Float64Array(columns.rows.length * 2),
+  strays?: readonly StrayShot[],
 ): AnalysedGroup {
   const n = columns.rows.length;
   const { fields, rows } = columns;
-  const found = findStrays({ rows, carryM: fields.carry, smashFactor: columns.smashFactor, offlineM: fields.offline });
+  const found = strays ?? groupStrays(columns);
+  // 0 not flagged, 1 left out by default (misread, mishit), 2 for review only
   const flagged = new Uint8Array(n);
-  for (const stray of found) flagged[stray.index] = 1;
+  for (const stray of found) flagged[stray.index] = stray.kind === 'review' ? 2 : 1;
 
   const kept = new Uint8Array(n);
   let keptCount = 0;
   for (let j = 0; j < n; j++) {
     const decision = options.decisions[rows[j]];
-    if (isShotKept({ flagged: flagged[j] === 1, decision, includeStrays: options.includeStrays })) {
+    if (isShotKept({ flagged: flagged[j] !== 0, reviewOnly: flagged[j] === 2, decision, includeStrays: options.includeStrays })) {
       kept[j] = 1;
       keptCount++;
     }
   }
 
-  const strays: SessionStray[] = [];
+  const listed: SessionStray[] = [];
   for (let j = 0; j < n; j++) {
     // Fitter drops of unflagged shots are listed too, so every left-out shot has its reason.
-    if (flagged[j] === 0 && options.decisions[rows[j]] === 'drop') strays.push({ row: rows[j], reason: 'dropped by the fitter' });
+    if (flagged[j] === 0 && options.decisions[rows[j]] === 'drop') listed.push({ row: rows[j], kind: null, reason: 'Dropped by the fitter', inFigures: false });
   }
   for (const stray of found) {
     const decision = options.decisions[stray.row];
     const note = decision === 'keep' ? ' (kept by the fitter)' : decision === 'drop' ? ' (dropped by the fitter)' : '';
-    strays.push({ row: stray.row, reason: describeStray(stray, options.formatDistance) + note });
+    listed.push({ row: stray.row, kind: stray.kind, reason: describeStray(stray, options.formatValue) + note, inFigures: kept[stray.index] === 1 });
   }
-  strays.sort((a, b) => a.row - b.row);
+  listed.sort((a, b) => a.row - b.row);
 
   const values = scratch.length >= n ? scratch.subarray(0, n) : new Float64Array(n);
   const summaries: Partial<Record<ShotField, FieldSummary>> = {};
@@ -111,7 +134,8 @@ export function analyseGroup(
       smashFactor,
       oval,
       predictionOval,
-      strays,
+      strays: listed,
+      odds: { fairway: { widthM: DEFAULT_FAIRWAY_WIDTH_M, p: null }, green: { radiusM: DEFAULT_GREEN_RADIUS_M, carryM: null, p: null } },
     },
     kept,
     columns,

@@ -3,11 +3,14 @@ import type { Shot, ShotField } from '@/analysis/fields';
 import { compareBuilds } from '@/analysis/head-to-head';
 import type { BuildSample } from '@/analysis/head-to-head';
 import { buildLadder } from '@/analysis/ladder';
+import { DEFAULT_FAIRWAY_WIDTH_M, DEFAULT_GREEN_RADIUS_M, onTargetOdds } from '@/analysis/odds';
+import { medianInPlace } from '@/analysis/statistics';
 import type { LadderGroup } from '@/analysis/ladder';
-import { analyseGroup } from './analyse-group';
+import { analyseGroup, groupStrays } from './analyse-group';
 import type { AnalysedGroup } from './analyse-group';
 import type { GroupRef, SessionAnalysis, SessionOptions } from './session-types';
 import { shotColumns } from './shot-columns';
+import type { ShotColumns } from './shot-columns';
 
 function keptValues(column: Float64Array, kept: Uint8Array): Float64Array {
   const out = new Float64Array(column.length);
@@ -23,6 +26,44 @@ function buildSample(group: AnalysedGroup): BuildSample {
   }
   columns.smashFactor = keptValues(group.columns.smashFactor, group.kept);
   return { club: group.columns.club, build: group.columns.build, columns };
+}
+
+/**
+ * Each group's on-target odds from its kept shots, at one green carry per club (the median of
+ * the club's kept carries, all builds together, unless given), so builds meet the same target.
+ */
+function addOdds(groups: AnalysedGroup[], odds: NonNullable<SessionOptions['odds']>): void {
+  const byClub = new Map<string, AnalysedGroup[]>();
+  for (const g of groups) {
+    const list = byClub.get(g.columns.club);
+    if (list) list.push(g);
+    else byClub.set(g.columns.club, [g]);
+  }
+  const fairwayWidthM = odds.fairwayWidthM ?? DEFAULT_FAIRWAY_WIDTH_M;
+  const greenRadiusM = odds.greenRadiusM ?? DEFAULT_GREEN_RADIUS_M;
+  for (const [club, list] of byClub) {
+    let targetCarryM: number | null = odds.targetCarryM?.[club] ?? null;
+    if (targetCarryM === null) {
+      const carries = list.flatMap((g) => (g.columns.fields.carry ? Array.from(keptValues(g.columns.fields.carry, g.kept)).filter(Number.isFinite) : []));
+      targetCarryM = carries.length ? medianInPlace(Float64Array.from(carries)) : null;
+    }
+    for (const g of list) {
+      const offline = g.columns.fields.offline;
+      const carry = g.columns.fields.carry;
+      const none = new Float64Array(0);
+      g.analysis.odds = onTargetOdds(offline ? keptValues(offline, g.kept) : none, carry ? keptValues(carry, g.kept) : none, { fairwayWidthM, greenRadiusM, targetCarryM });
+    }
+  }
+}
+
+/** Same groups, rows and order: the measured twin of carried-over shots. */
+function sameLayout(a: readonly ShotColumns[], b: readonly ShotColumns[]): boolean {
+  if (a.length !== b.length) return false;
+  for (let g = 0; g < a.length; g++) {
+    if (a[g].club !== b[g].club || a[g].build !== b[g].build || a[g].rows.length !== b[g].rows.length) return false;
+    for (let j = 0; j < a[g].rows.length; j++) if (a[g].rows[j] !== b[g].rows[j]) return false;
+  }
+  return true;
 }
 
 function findGroup(groups: AnalysedGroup[], ref: GroupRef): AnalysedGroup {
@@ -43,15 +84,19 @@ function findGroup(groups: AnalysedGroup[], ref: GroupRef): AnalysedGroup {
 export function analyseSession(shots: readonly Shot[], options: SessionOptions = {}): SessionAnalysis {
   const level = options.level ?? 0.95;
   if (!(level > 0 && level < 1)) throw new RangeError('analyseSession: level must lie in (0, 1)');
-  const settings = { level, includeStrays: options.includeStrays ?? false, decisions: options.decisions ?? {}, formatDistance: options.formatDistance };
+  const settings = { level, includeStrays: options.includeStrays ?? false, decisions: options.decisions ?? {}, formatValue: options.formatValue };
   const columns = shotColumns(shots);
+  const measured = options.measured ? shotColumns(options.measured) : null;
+  if (measured && !sameLayout(columns, measured)) throw new RangeError('analyseSession: the measured shots are not the same shots');
   let largest = 0;
   for (const c of columns) largest = Math.max(largest, c.rows.length);
   const scratch = new Float64Array(2 * largest);
-  const analysed = columns.map((c) => analyseGroup(c, settings, scratch));
+  const analysed = columns.map((c, g) => analyseGroup(c, settings, scratch, measured ? groupStrays(measured[g]) : undefined));
   analysed.sort(
     (a, b) => compareClubs(a.columns.club, b.columns.club) || (a.columns.build ?? '').localeCompare(b.columns.build ?? ''),
   );
+
+  addOdds(analysed, options.odds ?? {});
 
   const ladderGroups: LadderGroup[] = [];
   for (const g of analysed) {
@@ -60,11 +105,11 @@ export function analyseSession(shots: readonly Shot[], options: SessionOptions =
   }
   const result: SessionAnalysis = {
     groups: analysed.map((g) => g.analysis),
-    ladder: buildLadder(ladderGroups, { chosenBuild: options.chosenBuild, loftByGroup: options.loftByGroup }),
+    ladder: buildLadder(ladderGroups, { chosenBuild: options.chosenBuild, loftByGroup: options.loftByGroup, neighbours: options.bagClubs }),
   };
   if (options.compare) {
     const [a, b] = options.compare;
-    result.headToHead = compareBuilds(buildSample(findGroup(analysed, a)), buildSample(findGroup(analysed, b)));
+    result.headToHead = compareBuilds(buildSample(findGroup(analysed, a)), buildSample(findGroup(analysed, b)), { margins: options.margins, units: options.units });
   }
   return result;
 }

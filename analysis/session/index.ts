@@ -1,5 +1,5 @@
 export { analyseSession } from './analyse-session';
-export { analyseGroup } from './analyse-group';
+export { analyseGroup, groupStrays } from './analyse-group';
 export type { AnalysedGroup } from './analyse-group';
 export { shotColumns } from './shot-columns';
 export type { ShotColumns } from './shot-columns';

@@ -22,3 +22,5 @@ export { welchTTest } from './welch-t-test';
 export type { SampleMoments, WelchResult } from './welch-t-test';
 export { varianceRatioTest } from './variance-ratio-test';
 export type { VarianceRatioResult } from './variance-ratio-test';
+export { brownForsytheTest, spreadDifference } from './brown-forsythe-test';
+export type { BrownForsytheResult, SpreadDifference } from './brown-forsythe-test';

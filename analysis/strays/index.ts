@@ -1,10 +1,12 @@
 export { modifiedZScores, MODIFIED_Z_LIMIT } from './modified-z-score';
 export type { ModifiedZScores } from './modified-z-score';
 export { robustGroundDistances, GROUND_DISTANCE_LIMIT, GROUND_STRAY_LEVEL } from './robust-ground-distance';
-export type { RobustGroundDistances } from './robust-ground-distance';
+export type { GroundDistanceOptions, RobustGroundDistances } from './robust-ground-distance';
+export { madFloor, offlineMadFloor, STRAY_FLOORS } from './stray-floors';
+export type { ScoredField } from './stray-floors';
 export { findStrays, groundDistanceLimit, MIN_SHOTS_FOR_SCORE, MIN_SHOTS_FOR_GROUND } from './find-strays';
-export type { StrayFlag, StrayRule, StrayShot, StrayInput } from './find-strays';
-export { describeStray, describeStrayFlag, formatMetres } from './describe-stray';
-export type { DistanceFormatter } from './describe-stray';
+export type { StrayFlag, StrayKind, StrayRule, StrayShot, StrayInput } from './find-strays';
+export { describeStray, describeStrayFlag, formatCanonical, STRAY_KIND_WORDS, strayFormatterFor } from './describe-stray';
+export type { StrayUnitField, StrayValueFormatter } from './describe-stray';
 export { isShotKept } from './stray-decisions';
 export type { StrayDecision } from './stray-decisions';

@@ -26,10 +26,24 @@ export interface RobustGroundDistances {
   distances: Float64Array;
 }
 
-function robustScale(values: Float64Array, n: number, scratch: Float64Array): { center: number; scale: number } {
+function robustScale(values: Float64Array, n: number, scratch: Float64Array, madFloor = 0): { center: number; scale: number } {
   const spread = robustSpreadInPlace(values, n, scratch);
+  if (madFloor > 0 && spread.mad < madFloor) return { center: spread.median, scale: MAD_TO_SIGMA * madFloor };
   const scale = spread.mad > 0 ? MAD_TO_SIGMA * spread.mad : MEAN_AD_TO_SIGMA * (spread.meanAbsoluteDeviation ?? 0);
   return { center: spread.median, scale };
+}
+
+/** Options of robustGroundDistances. */
+export interface GroundDistanceOptions {
+  /** Floor under the MAD of offline, m (clustered or rounded values never make the scale tiny). */
+  madFloorOfflineM?: number;
+  /** Floor under the MAD of carry, m. */
+  madFloorCarryM?: number;
+  /**
+   * Count carry only when the shot is short of the centre: a long shot is never far off the
+   * pattern for being long (one-sided, as a fitter reads it). Default false.
+   */
+  shortOnly?: boolean;
 }
 
 /**
@@ -38,12 +52,18 @@ function robustScale(values: Float64Array, n: number, scratch: Float64Array): { 
  * r = (s(u)² − s(v)²)/(s(u)² + s(v)²) with u, v the sum and difference of the standardised
  * axes and s the same MAD scale (Gnanadesikan & Kettenring, Biometrics 28:81–124, 1972).
  * Distance: d² = (x² − 2r·x·y + y²)/(1 − r²) in standardised units; compare with
- * GROUND_DISTANCE_LIMIT. An axis with no spread at all is left out of the distance. Medians
- * make the result independent of shot order. O(n) expected.
+ * GROUND_DISTANCE_LIMIT. Floors under the MADs (options) keep clustered values from making a
+ * scale tiny; with `shortOnly` the carry part counts only for shots short of the centre. An axis
+ * with no spread at all (and no floor) is left out of the distance. Medians make the result
+ * independent of shot order. O(n) expected.
  * https://en.wikipedia.org/wiki/Robust_measures_of_scale
  * @example robustGroundDistances([0, 1, -1, 2, -2, 30], [150, 151, 149, 150, 152, 150]).distances[5] // => ≈ 13 (far right)
  */
-export function robustGroundDistances(offlineM: ArrayLike<number>, carryM: ArrayLike<number>): RobustGroundDistances {
+export function robustGroundDistances(
+  offlineM: ArrayLike<number>,
+  carryM: ArrayLike<number>,
+  options: GroundDistanceOptions = {},
+): RobustGroundDistances {
   const length = Math.min(offlineM.length, carryM.length);
   const distances = new Float64Array(length).fill(Number.NaN);
   const x = new Float64Array(length);
@@ -62,9 +82,9 @@ export function robustGroundDistances(offlineM: ArrayLike<number>, carryM: Array
   const scratch = new Float64Array(n);
   const work = new Float64Array(n);
   work.set(x.subarray(0, n));
-  const ox = robustScale(work, n, scratch);
+  const ox = robustScale(work, n, scratch, options.madFloorOfflineM ?? 0);
   work.set(y.subarray(0, n));
-  const oy = robustScale(work, n, scratch);
+  const oy = robustScale(work, n, scratch, options.madFloorCarryM ?? 0);
   const ix = ox.scale > 0 ? 1 / ox.scale : 0;
   const iy = oy.scale > 0 ? 1 / oy.scale : 0;
 
@@ -83,7 +103,8 @@ export function robustGroundDistances(offlineM: ArrayLike<number>, carryM: Array
     const b = carryM[i];
     if (!Number.isFinite(a) || !Number.isFinite(b)) continue;
     const u = (a - ox.center) * ix;
-    const v = (b - oy.center) * iy;
+    const along = (b - oy.center) * iy;
+    const v = options.shortOnly && along > 0 ? 0 : along;
     distances[i] = Math.sqrt(Math.max(0, (u * u - 2 * correlation * u * v + v * v) / oneMinusR2));
   }
   return { centerOffline: ox.center, centerCarry: oy.center, scaleOffline: ox.scale, scaleCarry: oy.scale, correlation, distances };

@@ -1,14 +1,26 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
+import { clubInfo } from '@/analysis/clubs';
+import type { UnitSystem } from '@/analysis/units';
+import { formatField } from '../format-field';
 import { parseOptionalNumber } from '../forms';
+import type { AnalysisParams } from '../queries/analysis';
 import { space } from '../theme';
 import { AppText } from '../ui/app-text';
 import { Button } from '../ui/button';
 import { ChoiceField } from '../ui/choice-field';
+import { Notice } from '../ui/notice';
 import { TextField } from '../ui/text-field';
-import type { AnalysisParams } from '../queries/analysis';
+import type { CourseChange } from './course-changes';
 
-type CourseConditionsProps = { value: AnalysisParams['to']; onChange: (to: AnalysisParams['to']) => void };
+type CourseConditionsProps = {
+  value: AnalysisParams['to'];
+  onChange: (to: AnalysisParams['to']) => void;
+  /** What changed for the chosen club, shown right under the buttons. */
+  changes: readonly CourseChange[];
+  busy: boolean;
+  units: UnitSystem;
+};
 
 const FIRMNESS = [
   { value: 'soft', label: 'Soft' },
@@ -16,8 +28,14 @@ const FIRMNESS = [
   { value: 'firm', label: 'Firm' },
 ] as const;
 
-/** The player's course (altitude, temperature, humidity, ground): the figures carried over by the ball-flight model. */
-export function CourseConditions({ value, onChange }: CourseConditionsProps) {
+const signed = (m: number, units: UnitSystem) => `${m >= 0 ? '+' : '−'}${formatField(Math.abs(m), 'carry', units)}`;
+
+/**
+ * The player's course (altitude, temperature, humidity, ground): the figures carried over by the
+ * ball-flight model, and what that changed, where the fitter is looking. The strays stay the
+ * measured ones.
+ */
+export function CourseConditions({ value, onChange, changes, busy, units }: CourseConditionsProps) {
   const [altitude, setAltitude] = useState(value?.altitudeM?.toString() ?? '');
   const [temperature, setTemperature] = useState(value?.temperatureC?.toString() ?? '');
   const [humidity, setHumidity] = useState(value?.humidityPct?.toString() ?? '');
@@ -38,7 +56,7 @@ export function CourseConditions({ value, onChange }: CourseConditionsProps) {
   return (
     <View style={styles.box}>
       <AppText variant="caption" tone="muted">
-        The ball-flight model flies each shot’s launch in the bay’s air and in the course’s air and adjusts carry, apex and flight time by the difference; total also follows the course’s ground (the roll model’s firmness settings are our assumption).
+        The ball-flight model flies each shot’s launch in the bay’s air and in the course’s air and adjusts carry, apex and flight time by the difference; total also follows the course’s ground (the roll model’s firmness settings are our assumption). The strays stay those of the measured shots.
       </AppText>
       <View style={styles.row}>
         <View style={styles.cell}><TextField label="Altitude" suffix="m" value={altitude} onChangeText={setAltitude} inputMode="decimal" /></View>
@@ -48,9 +66,18 @@ export function CourseConditions({ value, onChange }: CourseConditionsProps) {
       <ChoiceField label="Ground" value={firmness} options={FIRMNESS} onChange={setFirmness} />
       {error ? <AppText tone="danger">{error}</AppText> : null}
       <View style={styles.row}>
-        <Button compact title="Show at the course" onPress={apply} />
+        <Button compact title="Show at the course" busy={busy} onPress={apply} />
         {value ? <Button compact variant="quiet" title="Back to measured" onPress={() => onChange(null)} /> : null}
       </View>
+      {value && !busy && changes.length > 0 ? (
+        <Notice tone="info" title="What changed at the course">
+          {changes.map((c) => (
+            <AppText key={c.build ?? ''}>
+              {`${c.build ?? clubInfo(c.club)?.label ?? c.club}: carry ${formatField(c.measuredCarryM, 'carry', units)} → ${formatField(c.courseCarryM, 'carry', units)} (${signed(c.changeM, units)})`}
+            </AppText>
+          ))}
+        </Notice>
+      ) : null}
     </View>
   );
 }

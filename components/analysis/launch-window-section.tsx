@@ -3,7 +3,7 @@ import { View } from 'react-native';
 import { clubInfo } from '@/analysis/clubs';
 import { clubWindowAim, launchWindowForClub, optimiseLaunch, simulateFlight, type Conditions } from '@/analysis/flight';
 import type { UnitSystem } from '@/analysis/units';
-import type { PlotShot } from '@/server/schemas';
+import type { AnalysisShot } from './plot-shots';
 import { LaunchWindowPlot } from '../charts';
 import { parseOptionalNumber } from '../forms';
 import { AppText } from '../ui/app-text';
@@ -13,7 +13,7 @@ import { formatField } from '../format-field';
 import { useWidth } from './use-width';
 
 type LaunchWindowSectionProps = {
-  shots: readonly PlotShot[];
+  shots: readonly AnalysisShot[];
   ballSpeedMps: number | null;
   /** The conditions to aim for: the player's course when given, else the fitting's. */
   air: Conditions;

@@ -4,7 +4,6 @@ import { clubInfo } from '@/analysis/clubs';
 import { describeOvalSpread, ovalSpread } from '@/analysis/ovals';
 import type { GroupAnalysis } from '@/analysis/session';
 import type { UnitSystem } from '@/analysis/units';
-import type { PlotShot } from '@/server/schemas';
 import { OvalPlot } from '../charts';
 import type { PlotShot as ChartShot } from '../charts';
 import { space } from '../theme';
@@ -12,13 +11,14 @@ import { AppText } from '../ui/app-text';
 import { Card } from '../ui/card';
 import { SwitchField } from '../ui/switch-field';
 import { formatField, formatSide } from '../format-field';
+import type { AnalysisShot } from './plot-shots';
 import { StrayList } from './stray-list';
 import { useWidth } from './use-width';
 
 type OvalSectionProps = {
   club: string;
   groups: readonly GroupAnalysis[];
-  shots: readonly PlotShot[];
+  shots: readonly AnalysisShot[];
   units: UnitSystem;
   canDecide: boolean;
   onDecide: (shotId: number, decision: 'keep' | 'drop' | null) => void;
@@ -33,7 +33,10 @@ export function OvalSection({ club, groups, shots, units, canDecide, onDecide, d
   const clubGroups = groups.filter((g) => g.club === club);
   const clubShots = useMemo(() => shots.filter((s) => s.club === club), [shots, club]);
   const plotted: ChartShot[] = useMemo(
-    () => clubShots.filter((s) => s.carry !== null && s.offline !== null).map((s) => ({ ...s, id: String(s.id), carry: s.carry!, offline: s.offline! })),
+    () =>
+      clubShots
+        .filter((s) => s.carry !== null && s.offline !== null)
+        .map((s) => ({ id: String(s.id), row: s.row, club: s.club, build: s.build, decision: s.decision, stray: s.stray, carry: s.carry!, offline: s.offline! })),
     [clubShots],
   );
   const distance = (m: number) => formatField(m, 'carry', units);
@@ -82,7 +85,7 @@ export function OvalSection({ club, groups, shots, units, canDecide, onDecide, d
   );
 }
 
-function describeShot(s: PlotShot, units: UnitSystem): string {
+function describeShot(s: AnalysisShot, units: UnitSystem): string {
   return `Shot ${s.row} (${s.build ?? 'no build'}): carry ${formatField(s.carry, 'carry', units)}, ${formatSide(s.offline, 'offline', units)}.`;
 }
 

@@ -39,6 +39,8 @@ export function chartRungs(ladder: readonly BagLadderRung[]): { rungs: LadderRun
       carryQ3M: r.carryQ3M ?? r.carryM!,
       carrySdM: null,
       gapToNextM: r.gapToNextM,
+      // clubs side by side in the bag are neighbours by definition
+      neighbourToNext: r.gapToNextM !== null,
       gapFlag: r.gapFlag,
       loftDeg: r.loftDeg,
       loftStepToNextDeg: r.loftStepToNextDeg,

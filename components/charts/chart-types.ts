@@ -1,10 +1,20 @@
-import type { PlotShot as PlotShotWire } from '@/server/schemas';
-
 /**
- * A shot on the dispersion plot: the server's plot shot (metres, offline + right of the target
- * line) with both ground coordinates present and the id as text (SVG keys and selection).
+ * A shot on the dispersion plot (metres, offline + right of the target line) with both ground
+ * coordinates present and the id as text (SVG keys and selection).
  */
-export type PlotShot = Pick<PlotShotWire, 'bayFileId' | 'row' | 'club' | 'build' | 'decision' | 'stray'> & { id: string; carry: number; offline: number };
+export type PlotShot = {
+  id: string;
+  bayFileId?: string;
+  /** Row in its bay file. */
+  row: number;
+  club: string;
+  build: string | null;
+  decision: 'keep' | 'drop' | null;
+  /** Flagged by the stray rules. */
+  stray: boolean;
+  carry: number;
+  offline: number;
+};
 
 /** One shot on the launch-vs-spin plane. */
 export type LaunchPoint = { id?: string; launchAngleDeg: number; spinRateRpm: number };

@@ -1,26 +1,32 @@
 /**
  * The head-to-head forest plot's numbers: per field the difference A − B and its 95% confidence
- * interval as a horizontal bar around zero. Fields have different units, so each row has its
- * own scale, symmetric about zero, so that zero lies on one vertical line for every row; each
- * row's end labels say its scale. Pure: no React.
+ * interval as a horizontal bar around zero, the field's margin as a band (inside it the builds
+ * are equivalent), and the verdict the analysis gave (one rule everywhere: equivalent, clear,
+ * not yet clear). Spread rows show the difference of the builds' mean distance from their
+ * median (the Brown–Forsythe quantities) the same way. Fields have different units, so each row
+ * has its own scale, symmetric about zero, so that zero lies on one vertical line for every
+ * row. Each row is three lines — name and verdict, the numbers, the bar — so nothing overprints
+ * on a phone. Pure: no React.
  */
 import { scaleLinear } from 'd3-scale';
-import type { ShotField } from '@/analysis/fields';
-import type { HeadToHead } from '@/analysis/head-to-head';
+import { FIELD_LABELS, type ShotField } from '@/analysis/fields';
+import { VERDICT_WORDS, type HeadToHead, type Verdict } from '@/analysis/head-to-head';
 import { displayUnits, findUnit, fromCanonical, type UnitSystem } from '@/analysis/units';
 import { formatNumber, formatSigned } from './chart-format';
 import type { PlotBox } from './chart-types';
-import { FIELD_LABELS } from './field-labels';
 
 export type DifferenceBarsInput = {
-  headToHead: Pick<HeadToHead, 'fields'>;
-  /** The fields to show, in order; fields the comparison lacks are left out. */
+  headToHead: Pick<HeadToHead, 'fields'> & Partial<Pick<HeadToHead, 'spread'>>;
+  /** The fields whose means to show, in order; fields the comparison lacks are left out. */
   fields: readonly ShotField[];
+  /** The fields whose spread to show after them (default none). */
+  spreadFields?: readonly ShotField[];
   units: UnitSystem;
   widthPx: number;
 };
 
 export type DifferenceRow = {
+  kind: 'mean' | 'spread';
   field: ShotField;
   label: string;
   /** Display unit as written after a number ('yd', 'mph', '°', 'rpm', ''). */
@@ -29,21 +35,25 @@ export type DifferenceRow = {
   diff: number;
   ciLow: number;
   ciHigh: number;
+  margin: number;
   /** Half the row's scale (the scale runs −half … +half), display units. */
   halfRange: number;
-  /** The interval excludes zero. */
-  clear: boolean;
-  verdict: 'clear' | 'not yet clear';
-  /** "+4.2 yd (95%: +1.1 to +7.3)". */
+  /** The analysis's verdict, and it in words ("equivalent", "clear", "not yet clear"). */
+  verdict: Verdict;
+  verdictText: string;
+  /** "+4.2 yd (95%: +1.1 to +7.3)"; for spread "sd 6.5 vs 4.0 yd · ratio 1.64". */
   valueText: string;
   rangeLabels: [string, string];
-  /** Row top, label baseline and bar centre, px. */
+  /** Row top, the name line's baseline, the numbers line's baseline and the bar's centre, px. */
   top: number;
   labelY: number;
+  valueY: number;
   barY: number;
   diffX: number;
   lowX: number;
   highX: number;
+  marginLowX: number;
+  marginHighX: number;
 };
 
 export type DifferenceBarsGeometry = {
@@ -54,7 +64,7 @@ export type DifferenceBarsGeometry = {
   rows: DifferenceRow[];
 };
 
-export const DIFFERENCE_ROW_PX = 64;
+export const DIFFERENCE_ROW_PX = 84;
 export const DIFFERENCE_MARGIN = { top: 28, bottom: 8, left: 8, right: 8 } as const;
 
 /** Decimals a field's difference is written with, in its display unit. */
@@ -76,11 +86,14 @@ export function niceCeil(value: number): number {
   return 10 * p;
 }
 
+type Interval = { diff: number; ci95: [number, number]; margin: number; verdict: Verdict };
+
 /**
  * Everything the forest plot draws, in px: per field (in the given order, those the comparison
- * has) the difference and its 95% interval in the user's units, on a row scale running from
- * −h to +h with h = niceCeil(1.1 × the largest |end|), zero in the middle of every row; clear
- * when the interval excludes zero. O(fields).
+ * has) the difference, its 95% interval and its margin in the user's units, on a row scale
+ * running from −h to +h with h = niceCeil(1.1 × the largest |end| or margin), zero in the
+ * middle of every row; then the spread rows asked for. The verdict is the analysis's, never
+ * worked out again here. O(fields).
  * @throws RangeError when widthPx is not a positive number
  * @example differenceBarsGeometry({ headToHead, fields: ['carry'], units: 'imperial', widthPx: 390 }).rows[0].valueText
  */
@@ -88,50 +101,67 @@ export function differenceBarsGeometry(input: DifferenceBarsInput): DifferenceBa
   if (!(input.widthPx > 0) || !Number.isFinite(input.widthPx)) throw new RangeError('differenceBarsGeometry needs a positive width');
   const m = DIFFERENCE_MARGIN;
   const units = displayUnits(input.units);
-  const present = input.fields.filter((f) => input.headToHead.fields[f] !== undefined);
+  const wanted: { kind: 'mean' | 'spread'; field: ShotField; c: Interval; sds?: [number, number]; ratio?: number }[] = [];
+  for (const field of input.fields) {
+    const c = input.headToHead.fields[field];
+    if (c) wanted.push({ kind: 'mean', field, c });
+  }
+  for (const field of input.spreadFields ?? []) {
+    const s = input.headToHead.spread?.fields[field];
+    if (s) wanted.push({ kind: 'spread', field, c: s, sds: [s.sdA, s.sdB], ratio: s.ratio });
+  }
   const plot: PlotBox = {
     left: m.left,
     top: m.top,
     right: Math.max(m.left + 40, input.widthPx - m.right),
-    bottom: m.top + present.length * DIFFERENCE_ROW_PX,
+    bottom: m.top + wanted.length * DIFFERENCE_ROW_PX,
   };
   const zeroX = (plot.left + plot.right) / 2;
-  const rows = present.map((field, i): DifferenceRow => {
-    const c = input.headToHead.fields[field]!;
+  const rows = wanted.map(({ kind, field, c, sds, ratio }, i): DifferenceRow => {
     const unit = units[field];
     const unitLabel = findUnit(unit)?.label ?? unit;
-    const toUnit = (v: number) => fromCanonical(v, unit, field);
+    const toUnit = (v: number) => (field === 'smashFactor' ? v : fromCanonical(v, unit, field));
     const diff = toUnit(c.diff);
     const ciLow = toUnit(Math.min(c.ci95[0], c.ci95[1]));
     const ciHigh = toUnit(Math.max(c.ci95[0], c.ci95[1]));
-    const halfRange = niceCeil(1.1 * Math.max(Math.abs(ciLow), Math.abs(ciHigh), Math.abs(diff)));
+    const margin = toUnit(c.margin);
+    const halfRange = niceCeil(1.1 * Math.max(Math.abs(ciLow), Math.abs(ciHigh), Math.abs(diff), margin));
     const x = scaleLinear().domain([-halfRange, halfRange]).range([plot.left, plot.right]);
-    const clear = ciLow > 0 || ciHigh < 0;
     // An interval clear of zero never reads as touching zero: up to two more decimals if needed.
     let dp = differenceDecimals(field);
+    const clear = ciLow > 0 || ciHigh < 0;
     const roundsToZero = (v: number, d: number) => Number(Math.abs(v).toFixed(d)) === 0;
     for (let extra = 0; clear && extra < 2 && (roundsToZero(ciLow, dp) || roundsToZero(ciHigh, dp)); extra++) dp++;
     const withUnit = (text: string) => (unitLabel === '' ? text : unitLabel === '°' ? `${text}°` : `${text} ${unitLabel}`);
     const top = plot.top + i * DIFFERENCE_ROW_PX;
     const rangeText = formatNumber(halfRange, halfRange < 1 ? 3 : halfRange % 1 === 0 ? 0 : 1);
+    const valueText =
+      kind === 'mean'
+        ? `${withUnit(formatSigned(diff, dp))} (95%: ${formatSigned(ciLow, dp)} to ${formatSigned(ciHigh, dp)})`
+        : `sd ${formatNumber(toUnit(sds![0]), dp)} vs ${withUnit(formatNumber(toUnit(sds![1]), dp))} · ratio ${ratio!.toFixed(2)}`;
     return {
+      kind,
       field,
-      label: FIELD_LABELS[field],
+      label: kind === 'mean' ? FIELD_LABELS[field] : field === 'offline' ? 'Left–right spread' : `${FIELD_LABELS[field]} spread`,
       unitLabel,
       diff,
       ciLow,
       ciHigh,
+      margin,
       halfRange,
-      clear,
-      verdict: clear ? 'clear' : 'not yet clear',
-      valueText: `${withUnit(formatSigned(diff, dp))} (95%: ${formatSigned(ciLow, dp)} to ${formatSigned(ciHigh, dp)})`,
+      verdict: c.verdict,
+      verdictText: VERDICT_WORDS[c.verdict],
+      valueText,
       rangeLabels: [withUnit(`\u2212${rangeText}`), withUnit(`+${rangeText}`)],
       top,
-      labelY: top + 16,
-      barY: top + 34,
+      labelY: top + 17,
+      valueY: top + 34,
+      barY: top + 52,
       diffX: x(diff),
       lowX: x(ciLow),
       highX: x(ciHigh),
+      marginLowX: x(-margin),
+      marginHighX: x(margin),
     };
   });
   return { widthPx: input.widthPx, heightPx: plot.bottom + m.bottom, plot, zeroX, rows };

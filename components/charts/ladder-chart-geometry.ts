@@ -38,8 +38,10 @@ export type LadderGap = {
   /** "12 yd" or "5 yd · tight". */
   text: string;
   flag: GapFlag;
-  /** "4° loft" or "8° loft · wide"; null when a loft is unknown. */
+  /** "4° loft" or "8° loft · wide"; "clubs skipped" when the two are not neighbours (a club between was not hit); null otherwise. */
   loftText: string | null;
+  /** The two clubs are neighbours (gaps are flagged only between neighbours). */
+  neighbours: boolean;
   loftFlag: LoftStepFlag;
 };
 
@@ -156,7 +158,12 @@ export function ladderChartGeometry(input: LadderChartInput): LadderGeometry {
     const word = gapFlagWord(r.gapFlag);
     const gapText = `${formatNumber(d(r.gapToNextM))} ${unit}`;
     const loftWord = r.loftStepFlag === null ? null : LOFT_FLAG_WORDS[r.loftStepFlag];
-    const loftText = r.loftStepToNextDeg === null ? null : `${formatSigned(r.loftStepToNextDeg, Number.isInteger(r.loftStepToNextDeg) ? 0 : 1)}° loft${loftWord ? ` · ${loftWord}` : ''}`;
+    const neighbours = r.neighbourToNext !== false;
+    const loftText = !neighbours
+      ? 'clubs skipped'
+      : r.loftStepToNextDeg === null
+        ? null
+        : `${formatSigned(r.loftStepToNextDeg, Number.isInteger(r.loftStepToNextDeg) ? 0 : 1)}° loft${loftWord ? ` · ${loftWord}` : ''}`;
     const boundary = plot.top + (i + 1) * LADDER_ROW_PX;
     gaps.push({
       from: r.club,
@@ -168,6 +175,7 @@ export function ladderChartGeometry(input: LadderChartInput): LadderGeometry {
       flag: r.gapFlag,
       loftText,
       loftFlag: r.loftStepFlag,
+      neighbours,
     });
   }
   return {

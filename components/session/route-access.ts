@@ -29,6 +29,7 @@ export const ROUTE_ACCESS: Readonly<Record<string, readonly Role[]>> = {
   '/my-fittings': PLAYER,
   '/team': OWNER,
   '/team/new': OWNER,
+  '/team/margins': OWNER,
   '/recipes': OWNER,
   '/recipes/[id]': OWNER,
   '/players/[id]/bag': EVERYONE,

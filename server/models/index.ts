@@ -10,10 +10,11 @@ import { Player } from './player';
 import { Recipe } from './recipe';
 import { Shop } from './shop';
 import { SpecSheetRecord } from './spec-sheet';
+import { ShopMargins } from './shop-margins';
 import { User } from './user';
 import { WorkshopSettingsRecord } from './workshop-settings';
 
-export { BayFile, Build, Fitting, PasswordReset, Player, Recipe, Shop, User };
+export { BayFile, Build, Fitting, PasswordReset, Player, Recipe, Shop, ShopMargins, User };
 export { BagClub, BagClubHistory, ChosenBuild, ChosenBuildConfirmation, ChosenTakeOut, SpecSheetRecord, WorkshopSettingsRecord };
 
 /** Registers every model and association on one Sequelize instance. */
@@ -27,6 +28,7 @@ export function initModels(sequelize: Sequelize): void {
   Build.initModel(sequelize);
   PasswordReset.initModel(sequelize);
   initBagModels(sequelize);
+  ShopMargins.initModel(sequelize);
 
   Shop.hasMany(User, { foreignKey: 'shopId' });
   User.belongsTo(Shop, { foreignKey: 'shopId', as: 'shop' });
@@ -47,6 +49,8 @@ export function initModels(sequelize: Sequelize): void {
   Shop.hasMany(Recipe, { foreignKey: 'shopId' });
   Recipe.belongsTo(Shop, { foreignKey: 'shopId' });
   Recipe.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
+  ShopMargins.belongsTo(Shop, { foreignKey: 'shopId' });
+  ShopMargins.belongsTo(User, { foreignKey: 'updatedBy', as: 'updater' });
 }
 
 /** The bag, chosen builds, spec sheets and workshop settings (migration 0007). */

@@ -1,19 +1,34 @@
-import { Router } from 'express';
+import { Router, type Response } from 'express';
 import { z } from 'zod';
 import type { Sequelize } from 'sequelize';
 import { actorOf } from '../middleware/authenticate';
 import { sendPreparedJson } from '../middleware/send-prepared-json';
-import { analysisQuerySchema, buildSpecBodySchema, idParamsSchema, shotDecisionBodySchema } from '../schemas';
+import { analysisQuerySchema, buildSpecBodySchema, idParamsSchema, shotDecisionBodySchema, shotPageQuerySchema } from '../schemas';
 import { analyseFitting } from '../services/analysis';
 import { type AnalysisCache, cachedFittingAnalysis } from '../services/analysis-cache';
 import { getBuild, listBuilds, updateBuild } from '../services/bay-files';
-import { listShots, setShotDecision } from '../services/shots';
+import { exportGroupsCsv, exportShotsCsv, listShotPage, setShotDecision } from '../services/shots';
+
+/** Sends CSV text as a download. */
+function sendCsv(res: Response, fileName: string, text: string): void {
+  res.set('Content-Type', 'text/csv; charset=utf-8');
+  res.set('Content-Disposition', `attachment; filename="${fileName}"`);
+  res.send(text);
+}
 
 export function shotsRouter(sequelize: Sequelize, analysisCache: AnalysisCache): Router {
   const router = Router();
   router.get('/fittings/:id/shots', async (req, res) => {
     const { id } = idParamsSchema.parse(req.params);
-    res.json(await listShots(sequelize, actorOf(res), id));
+    res.json(await listShotPage(sequelize, actorOf(res), id, shotPageQuerySchema.parse(req.query)));
+  });
+  router.get('/fittings/:id/shots.csv', async (req, res) => {
+    const { id } = idParamsSchema.parse(req.params);
+    sendCsv(res, `shots-${id.slice(0, 8)}.csv`, await exportShotsCsv(sequelize, actorOf(res), id));
+  });
+  router.get('/fittings/:id/groups.csv', async (req, res) => {
+    const { id } = idParamsSchema.parse(req.params);
+    sendCsv(res, `groups-${id.slice(0, 8)}.csv`, await exportGroupsCsv(sequelize, actorOf(res), id));
   });
   router.get('/fittings/:id/analysis', async (req, res) => {
     const { id } = idParamsSchema.parse(req.params);
@@ -23,7 +38,16 @@ export function shotsRouter(sequelize: Sequelize, analysisCache: AnalysisCache):
     const actor = actorOf(res);
     // Computed once per fitting revision and query; the access check runs first every time.
     const answer = await cachedFittingAnalysis(analysisCache, actor, id, q, () =>
-      analyseFitting(sequelize, actor, id, { units: actor.units, level: q.level, includeStrays: q.all, compare: q.a && q.b ? [q.a, q.b] : undefined, to }),
+      analyseFitting(sequelize, actor, id, {
+        units: actor.units,
+        level: q.level,
+        includeStrays: q.all,
+        compare: q.a && q.b ? [q.a, q.b] : undefined,
+        to,
+        fairwayWidthM: q.fairwayWidthM,
+        greenRadiusM: q.greenRadiusM,
+        target: q.targetClub !== undefined && q.targetCarryM !== undefined ? { club: q.targetClub, carryM: q.targetCarryM } : undefined,
+      }),
     );
     await sendPreparedJson(req, res, answer);
   });

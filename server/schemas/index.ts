@@ -10,3 +10,4 @@ export * from './build-spec';
 export * from './bags';
 export * from './spec-sheets';
 export * from './workshop-settings';
+export * from './shop-margins';

@@ -15,6 +15,7 @@ import { SPEC_ATTRIBUTE_KEYS, specOf } from '../models/spec-attributes';
 import type { BagCarry, BagClub, BagHistoryItem, BagView, bagClubBodySchema, bagClubUpdateSchema, bagClubWearSchema } from '../schemas';
 import { type Actor, isStaff, requireStaff } from './actor';
 import { bagCarries } from './bag-carries';
+import { bumpPlayerFittingRevisions } from './fitting-revision';
 import { findVisiblePlayer } from './players';
 import { shopWorkshopRules } from './workshop-settings';
 
@@ -38,12 +39,17 @@ export function stateOf(row: BagClubModel): BagClubState {
   };
 }
 
-/** Records a change: who, when, what (the club's state after it). */
+/**
+ * Records a change: who, when, what (the club's state after it). Every bag write goes through
+ * here, in its transaction, so it also marks the player's fittings as changed: their ladders take
+ * the bag's clubs as neighbours.
+ */
 export async function recordChange(row: BagClubModel, actor: Actor, action: BagHistoryItem['action'], at: Date, transaction?: Transaction, fittingId: string | null = null): Promise<void> {
   await BagClubHistory.create(
     { bagClubId: row.id, shopId: row.shopId, playerId: row.playerId, action, changedAt: at, changedBy: actor.id, fittingId, snapshot: JSON.stringify(stateOf(row)) },
     { transaction },
   );
+  await bumpPlayerFittingRevisions(row.playerId, transaction);
 }
 
 /** The conflict answer when a club changed since the editor read it. */

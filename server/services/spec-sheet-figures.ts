@@ -8,16 +8,21 @@ import { RAD_PER_DEG } from '../../analysis/flight';
 import type { ChoiceFigures } from '../schemas';
 
 /**
- * HOOK (to fill after the decisions work is merged): on-target odds of the chosen build and the
- * head-to-head's one-sentence summary, read from the analysis once it carries them. Returns
- * nulls on this branch, so the sheet shows carry, spread and the carry difference only.
+ * On-target odds of the chosen build (the analysis's next-shot odds for its group) and the
+ * head-to-head's one-sentence summary against the rival, when both are known. O(groups).
  */
-export function decisionFiguresHook(
-  _analysis: SessionAnalysis,
-  _chosen: GroupRef,
-  _rival: GroupRef | null,
+export function decisionFigures(
+  analysis: SessionAnalysis,
+  chosen: GroupRef,
+  headToHead: HeadToHead | null,
 ): Pick<ChoiceFigures, 'onTargetOdds' | 'summary'> {
-  return { onTargetOdds: null, summary: null };
+  const group = analysis.groups.find((g) => sameGroup(g, chosen));
+  const odds = group?.odds;
+  const onTargetOdds =
+    odds && odds.fairway.p !== null && odds.green.p !== null
+      ? { fairwayWidthM: odds.fairway.widthM, fairway: odds.fairway.p, greenRadiusM: odds.green.radiusM, green: odds.green.p }
+      : null;
+  return { onTargetOdds, summary: headToHead?.summary ?? null };
 }
 
 /** Half-extents of an oval across (offline) and along (carry) the target line. */
@@ -72,6 +77,6 @@ export function choiceFigures(analysis: SessionAnalysis, chosen: GroupRef, rival
     ovalWidthM: extents?.widthM ?? null,
     ovalLengthM: extents?.lengthM ?? null,
     rival,
-    ...decisionFiguresHook(analysis, chosen, rivalRef),
+    ...decisionFigures(analysis, chosen, headToHead),
   };
 }

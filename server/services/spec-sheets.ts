@@ -58,7 +58,7 @@ async function workOutSheet(sequelize: Sequelize, actor: Actor, fittingId: strin
   }
   const bag = await bagViewOf(sequelize, actor, player!, after);
 
-  const { analysis } = await analyseFitting(sequelize, actor, fittingId, { level: 0.95, includeStrays: false });
+  const { analysis } = await analyseFitting(sequelize, actor, fittingId, { units: actor.units, level: 0.95, includeStrays: false });
   const choices: SpecSheetChoice[] = [];
   for (const c of [...chosen].sort((a, b) => (clubInfo(a.club)?.order ?? 999) - (clubInfo(b.club)?.order ?? 999))) {
     const b = buildById.get(c.buildId);
@@ -67,7 +67,7 @@ async function workOutSheet(sequelize: Sequelize, actor: Actor, fittingId: strin
     const rival = rivalOf(analysis, ref);
     const hasShots = analysis.groups.some((g) => g.club === ref.club && (g.build ?? null) === ref.build && g.kept >= 2);
     // The head-to-head needs the analysis with `compare` (one more analysis per chosen build with a rival).
-    const headToHead = rival && hasShots ? ((await analyseFitting(sequelize, actor, fittingId, { level: 0.95, includeStrays: false, compare: [ref, rival] })).analysis.headToHead ?? null) : null;
+    const headToHead = rival && hasShots ? ((await analyseFitting(sequelize, actor, fittingId, { units: actor.units, level: 0.95, includeStrays: false, compare: [ref, rival] })).analysis.headToHead ?? null) : null;
     const replaced = c.replacesBagClubId ? bagById.get(c.replacesBagClubId) : undefined;
     choices.push({
       club: b.club,

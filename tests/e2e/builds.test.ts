@@ -12,6 +12,8 @@ describe('editing a build’s specs in the browser', () => {
     await signInAs(page, demo.url, 'oskar@larchmere.example');
     await page.goto(`${demo.url}/fittings`);
     await page.getByRole('link', { name: /Fitting of Nell Tarrant/ }).first().click();
+    // The builds are one tap away from what the fitter decides from.
+    await page.getByRole('tab', { name: 'Builds' }).click();
     await page.getByRole('heading', { name: 'Builds' }).waitFor({ timeout: 30_000 });
 
     await page.getByRole('button', { name: 'Edit the specs of Driver, Stock 10.5' }).click();

@@ -20,6 +20,7 @@ describe('bay-file import in the browser', () => {
 
     await page.goto(`${demo.url}/fittings`);
     await page.getByRole('link', { name: /Fitting of Nell Tarrant/ }).first().click();
+    await page.getByRole('tab', { name: 'Session' }).click();
     await page.getByRole('button', { name: 'Import a bay file' }).click();
 
     // expo-document-picker makes its <input type=file> only on the click

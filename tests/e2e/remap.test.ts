@@ -12,6 +12,7 @@ async function signInAndOpenNell(page: Page): Promise<void> {
   await signInAs(page, demo.url, 'oskar@larchmere.example');
   await page.goto(`${demo.url}/fittings`);
   await page.getByRole('link', { name: /Fitting of Nell Tarrant/ }).first().click();
+  await page.getByRole('tab', { name: 'Session' }).click();
   await page.getByText(FILE).waitFor({ timeout: 30_000 });
 }
 
@@ -66,8 +67,11 @@ describe('re-mapping and deleting a stored bay file in the browser', () => {
     await page.getByText(`Delete ${FILE}? Its ${before} shots leave the analysis.`).waitFor();
     await page.getByRole('button', { name: `Yes, delete ${FILE}` }).click();
 
-    // the fitting's empty analysis state
+    // the fitting's empty analysis state, where a session starts (with the bay's caution)
+    await page.getByText('No bay file imported yet.').waitFor({ timeout: 30_000 });
+    await page.getByRole('tab', { name: 'Decide' }).click();
     await page.getByText('Import the launch monitor’s export of this session', { exact: false }).waitFor({ timeout: 30_000 });
+    await page.getByText('Before you hit').waitFor();
     expect(await page.getByText(FILE).count()).toBe(0);
     await page.close();
   });

@@ -45,6 +45,38 @@ describe('npm run analyse', () => {
     expect(h.fields.carry.diff).toBeCloseTo(h.fields.carry.meanA - h.fields.carry.meanB, 12);
   });
 
+  // The contract: per field verdict and margin (canonical units) beside ci95, by one rule —
+  // equivalent inside ±margin (Schuirmann 1987), else clear when the interval excludes 0, else
+  // unclear; spread fields { sdA, sdB, ratio, p, verdict, method } with the Brown–Forsythe p; a
+  // summary; per group odds { fairway: { widthM, p }, green: { radiusM, carryM, p } }.
+  it('analyse --compare --json gives verdicts, margins, spread, summary and odds as documented', () => {
+    const session = path.join(ROOT, 'fixtures/demo/nell-driver-and-7-iron.csv');
+    const r = run([session, '--json', '--compare', '7I:Steel 105 S', '7I:Graphite 75 R']);
+    expect(r.status).toBe(0);
+    const out = JSON.parse(r.stdout);
+    const h = out.headToHead;
+    expect(h.fields.carry.margin).toBeCloseTo(3 * 0.9144, 12); // 3 yd (NIST SP 811: 1 yd = 0.9144 m)
+    for (const c of Object.values(h.fields) as { ci95: [number, number]; margin: number; verdict: string }[]) {
+      const inside = c.ci95[0] > -c.margin && c.ci95[1] < c.margin;
+      const clear = c.ci95[0] > 0 || c.ci95[1] < 0;
+      expect(c.verdict).toBe(inside ? 'equivalent' : clear ? 'clear' : 'unclear');
+    }
+    for (const field of ['offline', 'carry']) {
+      const s = h.spread.fields[field];
+      expect(Object.keys(s)).toEqual(expect.arrayContaining(['sdA', 'sdB', 'ratio', 'p', 'verdict', 'method']));
+      expect(s.ratio).toBeCloseTo(s.sdA / s.sdB, 12);
+      expect(s.method).toMatch(/Brown–Forsythe/);
+      expect(['equivalent', 'clear', 'unclear']).toContain(s.verdict);
+    }
+    expect(h.summary).toMatch(/^Steel 105 S .*\. Overall: /);
+    for (const g of out.groups) {
+      expect(g.odds.fairway.widthM).toBeCloseTo(30 * 0.9144, 12);
+      expect(g.odds.fairway.p).toBeGreaterThanOrEqual(0);
+      expect(g.odds.fairway.p).toBeLessThanOrEqual(1);
+      expect(g.odds.green).toEqual({ radiusM: expect.closeTo(12 * 0.9144, 12), carryM: expect.any(Number), p: expect.any(Number) });
+    }
+  });
+
   it('analyse --level 0.68 scales the oval by the χ² quantile ratio', () => {
     // χ²₂ quantiles in closed form −2·ln(1 − p) (CHECKS.md): 0.68 → 2.278868566, 0.95 → 5.991464547.
     const session = path.join(ROOT, 'fixtures/demo/nell-driver-and-7-iron.csv');

@@ -17,6 +17,7 @@ export default function TeamScreen() {
       <AppText tone="muted">The people who fit at {me.shop.name}. A deactivated fitter can no longer sign in.</AppText>
       <View style={styles.actions}>
         <Button title="Add fitter" variant="secondary" compact onPress={() => router.push('/team/new')} />
+        <Button title="Decision margins" variant="secondary" compact onPress={() => router.push('/team/margins')} />
         <Button title="Import recipes" variant="secondary" compact onPress={() => router.push('/recipes')} />
       </View>
       <TeamList selfId={me.id} />

@@ -1,4 +1,4 @@
-import { moreShotsNeeded } from '@/analysis/head-to-head';
+import { moreShotsNeeded, shotsToSettle } from '@/analysis/head-to-head';
 
 describe('moreShotsNeeded', () => {
   // Normal approximation with z0.975 = 1.959964, z0.8 = 0.841621 (normal tables):
@@ -32,5 +32,23 @@ describe('moreShotsNeeded', () => {
 
   it('moreShotsNeeded with one shot in a group throws', () => {
     expect(() => moreShotsNeeded({ nA: 1, nB: 5, sdA: 1, sdB: 1, diff: 1 })).toThrow(RangeError);
+  });
+});
+
+describe('shotsToSettle', () => {
+  // (z0.975 + z0.8)² = 2.801585² = 7.84888 (normal tables). sd 8 and 8, diff 1, margin 2.7432:
+  // room = max(1, 1.7432) = 1.7432; 7.84888·128/1.7432² = 330.6 → 331 per build, 321 more after 10.
+  it('shotsToSettle with a small difference aims at the margin', () => {
+    expect(shotsToSettle({ nA: 10, nB: 10, sdA: 8, sdB: 8, diff: 1, margin: 2.7432 })).toBe(321);
+  });
+  // diff 6 > margin: room 6; 7.84888·50/36 = 10.9 → 11 per build, 3 more after 8.
+  it('shotsToSettle with a large difference aims at clearing zero', () => {
+    expect(shotsToSettle({ nA: 8, nB: 9, sdA: 5, sdB: 5, diff: -6, margin: 2.7432 })).toBe(3);
+  });
+  it('shotsToSettle never answers less than one shot', () => {
+    expect(shotsToSettle({ nA: 500, nB: 500, sdA: 1, sdB: 1, diff: 0.1, margin: 3 })).toBe(1);
+  });
+  it('shotsToSettle with a margin of 0 throws', () => {
+    expect(() => shotsToSettle({ nA: 5, nB: 5, sdA: 1, sdB: 1, diff: 0.1, margin: 0 })).toThrow(RangeError);
   });
 });

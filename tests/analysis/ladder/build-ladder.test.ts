@@ -31,12 +31,42 @@ describe('buildLadder', () => {
     expect(seven.gapToNextM).toBe(9);
   });
 
-  it('buildLadder flags a wide gap between 8-iron and pitching wedge', () => {
-    const rungs = buildLadder(BAG);
-    const eight = rungs.find((r) => r.club === '8I')!;
-    expect(eight.gapToNextM).toBe(19);
-    expect(eight.gapFlag).toBe('wide');
+  // Gap rules, common practice: over about 20 yd (18.3 m) between neighbouring irons is wide.
+  it('buildLadder flags a wide gap between neighbouring 9-iron and pitching wedge', () => {
+    const rungs = buildLadder([...BAG, { club: '9I', build: null, carryM: [135, 136, 134] }]);
+    const nine = rungs.find((r) => r.club === '9I')!;
+    expect(nine.gapToNextM).toBe(22);
+    expect(nine.neighbourToNext).toBe(true);
+    expect(nine.gapFlag).toBe('wide');
     expect(rungs[rungs.length - 1].gapToNextM).toBeNull();
+  });
+
+  it('buildLadder gives the 8-iron to wedge gap without a flag when the 9-iron was not hit', () => {
+    const eight = buildLadder(BAG).find((r) => r.club === '8I')!;
+    expect(eight.gapToNextM).toBe(19);
+    expect(eight.neighbourToNext).toBe(false);
+    expect(eight.gapFlag).toBeNull();
+  });
+
+  // Seen: "driver → 7-iron 55 yd · wide" when the clubs between were not hit.
+  it('buildLadder of a driver and a 7-iron alone flags no gap between them', () => {
+    const rungs = buildLadder([
+      { club: 'DR', build: null, carryM: [210, 214, 212] },
+      { club: '7I', build: null, carryM: [160, 158, 161] },
+    ]);
+    expect(rungs[0].gapToNextM).toBe(212 - 160);
+    expect(rungs[0].gapFlag).toBeNull();
+  });
+
+  it('buildLadder with the bag as neighbours flags a gap between clubs next to each other in the bag', () => {
+    const groups = [
+      { club: '5H', build: null, carryM: [170, 172, 171] },
+      { club: '7I', build: null, carryM: [140, 142, 141] },
+    ];
+    expect(buildLadder(groups)[0].gapFlag).toBeNull();
+    const rungs = buildLadder(groups, { neighbours: ['DR', '3W', '5H', '7I', '8I', '9I', 'PW'] });
+    expect(rungs[0].neighbourToNext).toBe(true);
+    expect(rungs[0].gapFlag).toBe('wide');
   });
 
   it('buildLadder with wedge lofts gives loft steps and flags', () => {

@@ -45,7 +45,7 @@ describe('analyseSession', () => {
     expect(a.n).toBe(8);
     expect(a.kept).toBe(7);
     expect(a.strays.map((s) => s.row)).toEqual([5]);
-    expect(a.strays[0].reason).toMatch(/^carry 112 m is far short of this group's median 148 m/);
+    expect(a.strays[0].reason).toMatch(/^Mishit: .*carry 112 m, far short of this group's 148 m/);
     expect(a.fields.carry!.n).toBe(7);
     expect(a.fields.carry!.min).toBe(146);
   });
@@ -74,7 +74,7 @@ describe('analyseSession', () => {
     expect(a.fields.carry!.min).toBe(112);
     expect(a.fields.carry!.max).toBe(151);
     expect(a.strays).toEqual([
-      { row: 2, reason: 'dropped by the fitter' },
+      { row: 2, kind: null, reason: 'Dropped by the fitter', inFigures: false },
       expect.objectContaining({ row: 5, reason: expect.stringMatching(/\(kept by the fitter\)$/) }),
     ]);
   });
@@ -151,7 +151,7 @@ describe('analyseSession', () => {
 
   it('analyseSession group shape has exactly the agreed keys', () => {
     const g = analyseSession(session()).groups[1];
-    expect(Object.keys(g).sort()).toEqual(['build', 'club', 'fields', 'kept', 'n', 'oval', 'predictionOval', 'smashFactor', 'strays'].sort());
+    expect(Object.keys(g).sort()).toEqual(['build', 'club', 'fields', 'kept', 'n', 'odds', 'oval', 'predictionOval', 'smashFactor', 'strays'].sort());
     expect(Object.keys(g.fields.carry!).sort()).toEqual(['max', 'mean', 'median', 'min', 'n', 'q1', 'q3', 'sd'].sort());
     expect(Object.keys(g.oval!).sort()).toEqual(['angleDeg', 'area', 'centerCarry', 'centerOffline', 'level', 'semiMajor', 'semiMinor'].sort());
   });
@@ -172,5 +172,29 @@ describe('analyseSession', () => {
       }),
       { numRuns: 50 },
     );
+  });
+});
+
+describe('analyseSession odds', () => {
+  // Fairway odds of a group: the Student t predictive of its kept offline (see tests/analysis/odds),
+  // checked here against the closed form with jstat for the 7-iron A group.
+  it('analyseSession gives each group fairway odds from its kept shots and a green at the club’s median carry', () => {
+    const a = analyseSession(session()).groups;
+    const seven = a.filter((g) => g.club === '7I');
+    const greenCarry = seven[0].odds.green.carryM;
+    expect(seven.every((g) => g.odds.green.carryM === greenCarry)).toBe(true);
+    expect(seven[0].odds.fairway.widthM).toBeCloseTo(30 * 0.9144, 12);
+    expect(seven[0].odds.green.radiusM).toBeCloseTo(12 * 0.9144, 12);
+    const off = seven[0].fields.offline!;
+    const { jStat } = jest.requireActual('jstat');
+    const s = off.sd! * Math.sqrt(1 + 1 / off.n);
+    const w = (30 * 0.9144) / 2;
+    expect(seven[0].odds.fairway.p).toBeCloseTo(jStat.studentt.cdf((w - off.mean) / s, off.n - 1) - jStat.studentt.cdf((-w - off.mean) / s, off.n - 1), 10);
+  });
+
+  it('analyseSession with targets set uses them', () => {
+    const g = analyseSession(session(), { odds: { fairwayWidthM: 20, greenRadiusM: 5, targetCarryM: { '7I': 140 } } }).groups[1];
+    expect(g.odds.fairway.widthM).toBe(20);
+    expect(g.odds.green).toMatchObject({ radiusM: 5, carryM: 140 });
   });
 });

@@ -1,48 +1,75 @@
-import { describeStray, describeStrayFlag, formatMetres } from '@/analysis/strays';
+import { describeStray, describeStrayFlag, formatCanonical, strayFormatterFor } from '@/analysis/strays';
+
+const YD = 0.9144; // NIST SP 811 (2008), Appendix B: 1 yd = 0.9144 m exactly
+const MPH = 0.44704; // NIST SP 811: 1 mph = 0.44704 m/s exactly
+const imperial = (value: number, field: 'carry' | 'offline' | 'ballSpeed') =>
+  field === 'ballSpeed' ? `${(value / MPH).toFixed(1)} mph` : `${Math.round(value / YD)} yd`;
 
 describe('describeStrayFlag', () => {
   it('describeStrayFlag on a short carry gives the plain sentence in metres', () => {
-    expect(describeStrayFlag({ rule: 'carry', value: 112.2, median: 148.1, modifiedZ: -5.23 })).toBe(
-      "carry 112 m is far short of this group's median 148 m (modified z −5.2)",
+    expect(describeStrayFlag({ rule: 'carry', kind: 'mishit', value: 112.2, median: 148.1, modifiedZ: -5.23, madUsed: 4, floored: false })).toBe(
+      "carry 112 m, far short of this group's 148 m (modified z −5.2)",
     );
   });
 
-  it('describeStrayFlag on a long carry says far beyond, with a plus sign', () => {
-    expect(describeStrayFlag({ rule: 'carry', value: 171, median: 148, modifiedZ: 4.06 })).toBe(
-      "carry 171 m is far beyond this group's median 148 m (modified z +4.1)",
+  it('describeStrayFlag on a low ball speed writes it in the units asked for', () => {
+    expect(describeStrayFlag({ rule: 'ballSpeed', kind: 'mishit', value: 58.1 * MPH * 2, median: 73 * MPH * 2, modifiedZ: -6, madUsed: 1, floored: true }, imperial)).toBe(
+      "ball speed 116.2 mph, far below this group's 146.0 mph (modified z −6.0)",
     );
   });
 
-  it('describeStrayFlag on a low smash factor says far below', () => {
-    expect(describeStrayFlag({ rule: 'smashFactor', value: 1.21, median: 1.45, modifiedZ: -6 })).toBe(
-      "smash factor 1.21 is far below this group's median 1.45 (modified z −6.0)",
+  it('describeStrayFlag on a launch far above says far above', () => {
+    expect(describeStrayFlag({ rule: 'launchAngle', kind: 'mishit', value: 24, median: 12.3, modifiedZ: 8.2, madUsed: 1, floored: true })).toBe(
+      "launch 24.0°, far above this group's 12.3° (modified z +8.2)",
     );
   });
 
-  // 1 yd = 0.9144 m (NIST SP 811, 2008, Appendix B).
-  it('describeStrayFlag on the ground with a yard formatter gives left and short in yards', () => {
+  it('describeStrayFlag on a misread names the impact bound', () => {
+    expect(describeStrayFlag({ rule: 'misread', kind: 'misread', field: 'smashFactor', value: 1.62, limit: 1.538 })).toBe(
+      'smash factor 1.62 is more than the impact of this club allows (at most 1.54, measurement error allowed)',
+    );
+  });
+
+  it('describeStrayFlag on a shot far left says a directional miss, the player’s dispersion, in yards', () => {
     const text = describeStrayFlag(
-      { rule: 'ground', distance: 5.04, limit: 3.7169, offlineFromCenterM: -18.288, carryFromCenterM: -9.144 },
-      (m) => `${Math.round(m / 0.9144)} yd`,
+      { rule: 'ground', kind: 'review', direction: 'left', distance: 7.04, limit: 6.77, offlineFromCenterM: -20 * YD, carryFromCenterM: -2 * YD },
+      imperial,
     );
-    expect(text).toBe("lands far from this group's pattern: 20 yd left and 10 yd short of its median centre (robust distance 5.0, limit 3.7)");
+    expect(text).toBe("a directional miss 20 yd left of this group's pattern: the player's dispersion (robust distance 7.0, limit 6.8)");
   });
 
-  it('formatMetres rounds to whole metres', () => {
-    expect(formatMetres(147.6)).toBe('148 m');
+  it('describeStrayFlag on a shot far short of the pattern says short', () => {
+    const text = describeStrayFlag({ rule: 'ground', kind: 'review', direction: 'short', distance: 8, limit: 6.77, offlineFromCenterM: 1, carryFromCenterM: -30 * YD }, imperial);
+    expect(text).toBe("lands 30 yd short of this group's pattern (robust distance 8.0, limit 6.8)");
+  });
+
+  it('formatCanonical writes whole metres and m/s to 0.1', () => {
+    expect(formatCanonical(147.6, 'carry')).toBe('148 m');
+    expect(formatCanonical(58.14, 'ballSpeed')).toBe('58.1 m/s');
   });
 });
 
 describe('describeStray', () => {
-  it('describeStray with two flags joins them with a semicolon', () => {
+  it('describeStray with two flags starts with its kind and joins them with a semicolon', () => {
     const text = describeStray({
       row: 4,
       index: 3,
+      kind: 'mishit',
       flags: [
-        { rule: 'carry', value: 112, median: 148, modifiedZ: -5.2 },
-        { rule: 'smashFactor', value: 1.2, median: 1.33, modifiedZ: -4 },
+        { rule: 'smashFactor', kind: 'mishit', value: 1.2, median: 1.33, modifiedZ: -4, madUsed: 0.02, floored: false },
+        { rule: 'carry', kind: 'mishit', value: 112, median: 148, modifiedZ: -5.2, madUsed: 4, floored: false },
       ],
     });
-    expect(text.split('; ')).toHaveLength(2);
+    expect(text).toBe("Mishit: smash factor 1.20, far below this group's 1.33 (modified z −4.0); carry 112 m, far short of this group's 148 m (modified z −5.2)");
+  });
+});
+
+describe('strayFormatterFor', () => {
+  // NIST SP 811 (2008), Appendix B: 1 yd = 0.9144 m, 1 mph = 0.44704 m/s, 1 km/h = 1/3.6 m/s (exact).
+  it('strayFormatterFor writes yards and mph, or metres and km/h', () => {
+    expect(strayFormatterFor('imperial')(91.44, 'carry')).toBe('100 yd');
+    expect(strayFormatterFor('imperial')(44.704, 'ballSpeed')).toBe('100.0 mph');
+    expect(strayFormatterFor('metric')(91.44, 'offline')).toBe('91 m');
+    expect(strayFormatterFor('metric')(10, 'ballSpeed')).toBe('36.0 km/h');
   });
 });

@@ -42,6 +42,30 @@ describe('modifiedZScores', () => {
     expect(z.scores[0]).toBe(0);
   });
 
+  // With the floor, the MAD used is max(MAD, floor): here MAD 0, floor 0.01, so
+  // M(1.40) = 0.6745·0.03/0.01 = 2.0235 (the formula of Iglewicz & Hoaglin with the floor's scale).
+  it('modifiedZScores with a floor above the MAD scales by the floor', () => {
+    const z = modifiedZScores([1.37, 1.37, 1.37, 1.37, 1.4], 0.01);
+    expect(z.scale).toBe('floor');
+    expect(z.madUsed).toBeCloseTo(0.01, 12);
+    expect(z.scores[4]).toBeCloseTo(2.0235, 9);
+  });
+
+  it('modifiedZScores with a floor below the MAD leaves the scores as without it', () => {
+    const xs = [148, 150, 147, 149, 112];
+    expect([...modifiedZScores(xs, 0.5).scores]).toEqual([...modifiedZScores(xs).scores]);
+  });
+
+  it('modifiedZScores with a floor given as a function of the median uses that floor', () => {
+    const z = modifiedZScores([200, 200, 200, 200, 190], (median) => 0.015 * median);
+    expect(z.madUsed).toBeCloseTo(3, 12);
+    expect(z.scores[4]).toBeCloseTo((0.6745 * -10) / 3, 9);
+  });
+
+  it('modifiedZScores with a negative floor throws', () => {
+    expect(() => modifiedZScores([1, 2, 3], -1)).toThrow(RangeError);
+  });
+
   it('modifiedZScores on equal values gives all zeros, never a division by zero', () => {
     const z = modifiedZScores([1.45, 1.45, 1.45]);
     expect(z.scale).toBe('none');

@@ -52,6 +52,23 @@ describe('robustGroundDistances', () => {
     expect(r.distances[30]).toBeGreaterThan(GROUND_DISTANCE_LIMIT);
   });
 
+  it('robustGroundDistances with shortOnly gives a shot long on line no distance along, and a short one its full distance', () => {
+    const { x, y } = normalPairs(30, 5, 5, 0, 5);
+    x.push(0, 0);
+    y.push(250, 50);
+    const both = robustGroundDistances(x, y);
+    const short = robustGroundDistances(x, y, { shortOnly: true });
+    expect(both.distances[30]).toBeGreaterThan(GROUND_DISTANCE_LIMIT);
+    expect(short.distances[30]).toBeLessThan(1);
+    expect(short.distances[31]).toBeCloseTo(both.distances[31], 1);
+  });
+
+  it('robustGroundDistances with a MAD floor never scales an axis below 1.4826 × the floor', () => {
+    const r = robustGroundDistances([0, 0, 0, 0, 0, 0.1], [150, 150, 150, 150, 150, 150], { madFloorOfflineM: 2, madFloorCarryM: 3 });
+    expect(r.scaleOffline).toBeCloseTo(1.4826 * 2, 9);
+    expect(r.scaleCarry).toBeCloseTo(1.4826 * 3, 9);
+  });
+
   it('robustGroundDistances with a missing value gives NaN there', () => {
     const r = robustGroundDistances([0, 1, Number.NaN, -1, 2], [150, 151, 150, 149, 150]);
     expect(r.distances[2]).toBeNaN();

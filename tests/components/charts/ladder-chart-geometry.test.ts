@@ -13,6 +13,7 @@ function rung(club: string, medianM: number, gapToNextM: number | null, extra: P
     carryQ3M: medianM + 3,
     carrySdM: 4,
     gapToNextM,
+    neighbourToNext: gapToNextM !== null,
     gapFlag: gapToNextM === null ? null : classifyCarryGap(gapToNextM, 'iron', 'iron'),
     loftDeg: null,
     loftStepToNextDeg: null,

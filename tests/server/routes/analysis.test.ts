@@ -35,8 +35,28 @@ describe('GET /api/fittings/:id/analysis', () => {
       expect(g.oval.level).toBe(0.95);
       expect(g.predictionOval.semiMajor).toBeGreaterThan(g.oval.semiMajor); // Hotelling scale > χ² scale for small n
     }
-    expect(res.body.shots).toHaveLength(44);
+    // Compact per-shot columns for the plots, not one object per shot.
+    expect(res.body.shots).toBeUndefined();
+    for (const column of ['id', 'row', 'group', 'carry', 'offline', 'ballSpeed', 'launchAngle', 'spinRate', 'decision', 'stray']) {
+      expect(res.body.plot[column]).toHaveLength(44);
+    }
     expect(res.body.analysis.ladder.map((r: { club: string }) => r.club)).toEqual(['DR', '7I']);
+    // The ladder's driver and 7-iron are not neighbours (the clubs between were not hit): no flag.
+    expect(res.body.analysis.ladder[0].gapFlag).toBeNull();
+  });
+
+  it('analysis gives each group its on-target odds at the shop’s targets', async () => {
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const res = await agent.get(`/api/fittings/${fittingId}/analysis`);
+    for (const g of res.body.analysis.groups) {
+      expect(g.odds.fairway.widthM).toBeCloseTo(30 * 0.9144, 9);
+      expect(g.odds.green.radiusM).toBeCloseTo(12 * 0.9144, 9);
+      expect(g.odds.fairway.p).toBeGreaterThan(0);
+    }
+    const asked = await agent.get(`/api/fittings/${fittingId}/analysis`).query({ fairwayWidthM: 20, greenRadiusM: 5, targetClub: '7I', targetCarryM: 120 });
+    const seven = asked.body.analysis.groups.find((g: { club: string }) => g.club === '7I');
+    expect(seven.odds.fairway.widthM).toBe(20);
+    expect(seven.odds.green).toMatchObject({ radiusM: 5, carryM: 120 });
   });
 
   it('analysis with a and b gives the head-to-head of two builds', async () => {
@@ -47,6 +67,19 @@ describe('GET /api/fittings/:id/analysis', () => {
     expect(h.a).toEqual({ club: '7I', build: 'Steel 105 S' });
     expect(h.fields.carry.diff).toBeCloseTo(h.fields.carry.meanA - h.fields.carry.meanB, 9);
     expect(h.fields.carry.ci95[0]).toBeLessThan(h.fields.carry.diff);
+    expect(['equivalent', 'clear', 'unclear']).toContain(h.fields.carry.verdict);
+    expect(h.spread.fields.offline.method).toMatch(/Brown–Forsythe/);
+    expect(h.summary).toMatch(/Overall: /);
+  });
+
+  it('analysis head-to-head reads verdicts by the shop’s margins', async () => {
+    const owner = await signedInAgent(ctx.app, world.owner.email);
+    await owner.put('/api/shop/margins').set(APP_HEADER).send({ margins: { carry: 50 } });
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const h = (await agent.get(`/api/fittings/${fittingId}/analysis`).query({ a: '7I|Steel 105 S', b: '7I|Graphite 75 R' })).body.analysis.headToHead;
+    expect(h.fields.carry.margin).toBe(50);
+    expect(h.fields.carry.verdict).toBe('equivalent');
+    await owner.put('/api/shop/margins').set(APP_HEADER).send({ margins: {} });
   });
 
   it('analysis with an unknown build to compare answers 400', async () => {
@@ -71,6 +104,10 @@ describe('GET /api/fittings/:id/analysis', () => {
     const apex = (b: typeof measured) => b.analysis.groups[0].fields.apexHeight.mean;
     expect(apex(high)).toBeLessThan(apex(measured) * 0.95);
     expect(high.analysis.groups[0].fields.carry.mean).not.toBeCloseTo(measured.analysis.groups[0].fields.carry.mean, 1);
+    // …and the strays stay the measured ones: normalising moves numbers, never the set of shots.
+    const strayRows = (b: typeof measured) => b.analysis.groups.map((g: { strays: { row: number }[] }) => g.strays.map((x) => x.row));
+    expect(strayRows(high)).toEqual(strayRows(measured));
+    expect(high.analysis.groups.map((g: { kept: number }) => g.kept)).toEqual(measured.analysis.groups.map((g: { kept: number }) => g.kept));
   });
 
   it('analysis carried over to firmer ground gives a longer driver total and reports the ground', async () => {
@@ -85,12 +122,15 @@ describe('GET /api/fittings/:id/analysis', () => {
   it('a dropped shot leaves the statistics and is reported as dropped', async () => {
     const agent = await signedInAgent(ctx.app, world.fitter.email);
     const before = (await agent.get(`/api/fittings/${fittingId}/analysis`)).body;
-    const shot = before.shots.find((s: { club: string; stray: boolean }) => s.club === '7I' && !s.stray);
-    await agent.patch(`/api/shots/${shot.id}`).set(APP_HEADER).send({ decision: 'drop' });
+    const plot = before.plot;
+    const i = plot.id.findIndex((_: number, k: number) => before.analysis.groups[plot.group[k]].club === '7I' && plot.stray[k] === null);
+    const shotId = plot.id[i];
+    const groupIndex = plot.group[i];
+    await agent.patch(`/api/shots/${shotId}`).set(APP_HEADER).send({ decision: 'drop' });
     const after = (await agent.get(`/api/fittings/${fittingId}/analysis`)).body;
-    const group = (b: typeof before) => b.analysis.groups.find((g: { club: string; build: string }) => g.club === '7I' && g.build === shot.build);
-    expect(group(after).kept).toBe(group(before).kept - 1);
-    await agent.patch(`/api/shots/${shot.id}`).set(APP_HEADER).send({ decision: null });
+    expect(after.analysis.groups[groupIndex].kept).toBe(before.analysis.groups[groupIndex].kept - 1);
+    expect(after.plot.decision[i]).toBe('drop');
+    await agent.patch(`/api/shots/${shotId}`).set(APP_HEADER).send({ decision: null });
   });
 
   it('the fitting’s player may see the analysis; another shop may not', async () => {

@@ -165,14 +165,14 @@ describe('bay-file commit', () => {
     const fitting = await buildFitting(world.shop, world.player, world.fitter);
     const agent = await signedInAgent(ctx.app, world.fitter.email);
     const created = await upload(agent, `/api/fittings/${fitting.id}/bay-files`, sessionCsv());
-    const shots = (await agent.get(`/api/fittings/${fitting.id}/shots`)).body;
+    const shots = (await agent.get(`/api/fittings/${fitting.id}/shots`)).body.shots;
     expect(shots).toHaveLength(12);
     const first = shots.find((s: { row: number }) => s.row === 1);
     expect((await agent.patch(`/api/shots/${first.id}`).set(APP_HEADER).send({ decision: 'drop' })).status).toBe(200);
     const recipe = { ...created.body.recipe, columns: { ...created.body.recipe.columns, 'Carry (yds)': { field: 'carry', unit: 'm' } } };
     const res = await agent.put(`/api/bay-files/${created.body.id}/recipe`).set(APP_HEADER).send({ recipe });
     expect(res.status).toBe(200);
-    const after = (await agent.get(`/api/fittings/${fitting.id}/shots`)).body;
+    const after = (await agent.get(`/api/fittings/${fitting.id}/shots`)).body.shots;
     expect(after).toHaveLength(12);
     const row1 = after.find((s: { row: number }) => s.row === 1);
     expect(row1.values.carry).toBeCloseTo(160, 9); // now read as metres

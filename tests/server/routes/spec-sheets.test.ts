@@ -82,7 +82,9 @@ describe('GET /api/fittings/:id/spec-sheet', () => {
     expect(choice).toMatchObject({ club: 'DR', clubLabel: 'Driver', buildLabel: 'Loft up', change: { kind: 'replace', replacedClubLabel: 'Driver' } });
     expect(choice.spec).toMatchObject({ loftDeg: 11.5, lengthIn: 46.5, addedMassG: 6 });
     // carries 205–209 m: median 207; against Low spin (200–204 m) +5 m
-    expect(choice.figures).toMatchObject({ n: 5, carryMedianM: 207, rival: { label: 'Low spin', carryDiffM: 5 }, onTargetOdds: null, summary: null });
+    expect(choice.figures).toMatchObject({ n: 5, carryMedianM: 207, rival: { label: 'Low spin', carryDiffM: 5 }, onTargetOdds: null });
+    // the head-to-head's sentence in the fitter's yards: 5 m = 5.47 yd (1 yd = 0.9144 m, NIST SP 811)
+    expect(choice.figures.summary).toMatch(/^Loft up carries 5\.5 yd farther \(clear\)/);
     expect(res.body.checks.map((c: { code: string }) => c.code)).toContain('over-46-local-rule');
     expect(res.body.ladder.find((r: { club: string }) => r.club === 'DR')).toMatchObject({ carrySource: 'hit', carryM: 207 });
     expect(res.body.caution).toMatch(/head maker’s instructions/);

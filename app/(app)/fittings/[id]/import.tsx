@@ -1,4 +1,5 @@
 import { Redirect, Stack, useLocalSearchParams } from 'expo-router';
+import { BaySafetyNote } from '@/components/fittings/bay-safety-note';
 import { ImportFlow } from '@/components/import/import-flow';
 import { useGoBack } from '@/components/navigation';
 import { useFittingQuery } from '@/components/queries/fittings';
@@ -23,6 +24,8 @@ export default function ImportBayFileScreen() {
       {query.isError ? <ErrorState error={query.error} onRetry={() => void query.refetch()} /> : null}
       {query.data ? (
         <>
+          {/* The session starts here: the bay's caution before the first file of a fitting. */}
+          {query.data.shotCount === 0 ? <BaySafetyNote /> : null}
           <AppText tone="muted">{`Into the fitting of ${query.data.playerName}.`}</AppText>
           <ImportFlow fittingId={id} units={me.units} canUseRecipes={isStaff(me.role)} onDone={goBack} />
         </>

@@ -1,25 +1,29 @@
 import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
 import { ChooseBuildsSection } from '@/components/bag/choose-builds-section';
 import { FittingBuilds } from '@/components/builds/fitting-builds';
-import { BaySafetyNote } from '@/components/fittings/bay-safety-note';
-import { FittingAnalysisArea } from '@/components/fittings/fitting-analysis-area';
-import { FittingBayFiles } from '@/components/fittings/fitting-bay-files';
-import { FittingDetails } from '@/components/fittings/fitting-details';
+import { DecideView } from '@/components/fittings/decide-view';
+import { FittingStart } from '@/components/fittings/fitting-start';
+import { FITTING_VIEWS, fittingView } from '@/components/fittings/fitting-views';
+import { LadderView } from '@/components/fittings/ladder-view';
+import { SessionView } from '@/components/fittings/session-view';
+import { ShotsView } from '@/components/fittings/shots-view';
+import { useFittingPageState } from '@/components/fittings/use-fitting-page-state';
 import { formatDate } from '@/components/format';
 import { useFittingQuery } from '@/components/queries/fittings';
 import { isStaff } from '@/components/session/permissions';
 import { useMe } from '@/components/session/session-provider';
-import { Button } from '@/components/ui/button';
 import { ErrorState } from '@/components/ui/error-state';
 import { LoadingState } from '@/components/ui/loading-state';
 import { Screen } from '@/components/ui/screen';
-import { Section } from '@/components/ui/section';
+import { SegmentedControl } from '@/components/ui/segmented-control';
 
 export default function FittingScreen() {
-  const { id } = useLocalSearchParams<{ id: string }>();
+  const { id, view } = useLocalSearchParams<{ id: string; view?: string }>();
   const router = useRouter();
   const me = useMe();
   const query = useFittingQuery(id);
+  const state = useFittingPageState();
+  const current = fittingView(view);
 
   if (query.isPending) return <LoadingState label="Loading the fitting…" />;
   if (query.isError) {
@@ -31,32 +35,18 @@ export default function FittingScreen() {
     );
   }
   const fitting = query.data;
+  const empty = fitting.shotCount === 0;
   return (
     <Screen>
       <Stack.Screen options={{ title: `${fitting.playerName} · ${formatDate(fitting.date)}` }} />
-      <BaySafetyNote />
-      {/* The shots come first: they are what the fitter and the player open the page for. */}
-      <FittingBayFiles fitting={fitting} />
-      <Section title="Shots and analysis">
-        <FittingAnalysisArea fitting={fitting} />
-      </Section>
-      <FittingBuilds fitting={fitting} />
-      <ChooseBuildsSection fitting={fitting} />
-      <Section
-        title="Details and conditions"
-        action={
-          isStaff(me.role) ? (
-            <Button
-              title="Edit"
-              variant="secondary"
-              compact
-              onPress={() => router.push({ pathname: '/fittings/[id]/edit', params: { id } })}
-            />
-          ) : null
-        }
-      >
-        <FittingDetails fitting={fitting} />
-      </Section>
+      <SegmentedControl label="Views of the fitting" value={current} options={FITTING_VIEWS} onChange={(v) => router.setParams({ view: v })} />
+      {empty && (current === 'decide' || current === 'shots' || current === 'ladder') ? <FittingStart fitting={fitting} canImport={isStaff(me.role) || fitting.remote} /> : null}
+      {!empty && current === 'decide' ? <DecideView fitting={fitting} state={state} /> : null}
+      {!empty && current === 'shots' ? <ShotsView fitting={fitting} state={state} /> : null}
+      {!empty && current === 'ladder' ? <LadderView fitting={fitting} state={state} /> : null}
+      {current === 'builds' ? <FittingBuilds fitting={fitting} /> : null}
+      {current === 'builds' ? <ChooseBuildsSection fitting={fitting} /> : null}
+      {current === 'session' ? <SessionView fitting={fitting} /> : null}
     </Screen>
   );
 }
