@@ -56,8 +56,9 @@ function shorterSevens(): Buffer {
 const analysisOf = (agent: Agent, fittingId: string) => agent.get(`/api/fittings/${fittingId}/analysis`);
 
 /** The answer's compact plot columns as one object per shot (club from the shot's group). */
-function shotsOf(body: { plot: { id: number[]; group: number[]; carry: (number | null)[]; decision: (string | null)[] }; analysis: { groups: { club: string }[] } }) {
-  return body.plot.id.map((id, i) => ({ id, club: body.analysis.groups[body.plot.group[i]]?.club, carry: body.plot.carry[i], decision: body.plot.decision[i] }));
+type PlotShotRow = { id: number; club: string; carry: number; decision: string | null };
+function shotsOf(body: { plot: { id: number[]; group: number[]; carry: number[]; decision: (string | null)[] }; analysis: { groups: { club: string }[] } }): PlotShotRow[] {
+  return body.plot.id.map((id, i) => ({ id, club: body.analysis.groups[body.plot.group[i]].club, carry: body.plot.carry[i], decision: body.plot.decision[i] }));
 }
 
 describe('GET /api/fittings/:id/analysis, kept per revision', () => {
@@ -113,7 +114,7 @@ describe('GET /api/fittings/:id/analysis, kept per revision', () => {
     expect((await agent.patch(`/api/shots/${shot.id}`).set(APP_HEADER).send({ decision: 'drop' })).status).toBe(200);
     const b2 = await analysisOf(other, fittingId);
     expect(b2.headers.etag).not.toBe(b1.headers.etag);
-    expect(shotsOf(b2.body).find((s: { id: number }) => s.id === shot.id).decision).toBe('drop');
+    expect(shotsOf(b2.body).find((s) => s.id === shot.id)!.decision).toBe('drop');
   });
 
   describe('analysis after each change it depends on is computed again', () => {
@@ -125,11 +126,11 @@ describe('GET /api/fittings/:id/analysis, kept per revision', () => {
     it('analysis after a stray decision shows the decision', async () => {
       const { fittingId } = await fittingWithDemo(agent);
       const before = await analysisOf(agent, fittingId);
-      const shot = shotsOf(before.body).find((s: { club: string }) => s.club === '7I');
+      const shot = shotsOf(before.body).find((s) => s.club === '7I')!;
       await agent.patch(`/api/shots/${shot.id}`).set(APP_HEADER).send({ decision: 'drop' });
       const after = await analysisOf(agent, fittingId).set('If-None-Match', before.headers.etag);
       expect(after.status).toBe(200);
-      expect(shotsOf(after.body).find((s: { id: number }) => s.id === shot.id).decision).toBe('drop');
+      expect(shotsOf(after.body).find((s) => s.id === shot.id)!.decision).toBe('drop');
     });
 
     it('analysis after another bay file counts its shots', async () => {
