@@ -14,7 +14,10 @@ import { playersRouter } from './routes/players';
 import { recipesRouter } from './routes/recipes';
 import { shotsRouter } from './routes/shots';
 import { teamRouter } from './routes/team';
+import { createRateLimits, type RateLimits } from './middleware/rate-limit';
+import { securityHeaders } from './middleware/security-headers';
 import type { CommitHooks } from './services/bay-files';
+import { createImportPool, type ImportPool } from './services/import-pool';
 import { createMailer, type Mailer } from './services/mailer';
 
 export interface AppDeps {
@@ -26,13 +29,28 @@ export interface AppDeps {
   log?: (message: string, error: unknown) => void;
   /** Test hooks into the bay-file commit (failure injection). */
   commitHooks?: CommitHooks;
+  /** Worker threads for bay files; by default a pool of config.importThreads (close it with closeApp). */
+  importPool?: ImportPool;
+  /** Rate limiters; by default kept in this database's rate_limits table. */
+  rateLimits?: RateLimits;
+}
+
+const pools = new WeakMap<Express, ImportPool>();
+
+/** Ends what createApp started for an app (its import worker pool, unless one was passed in). */
+export async function closeApp(app: Express): Promise<void> {
+  await pools.get(app)?.close();
 }
 
 /** Builds the Express app; listening is the caller's business (server/index.ts, tests). */
-export function createApp({ sequelize, config, mailer, serveWeb = false, log, commitHooks }: AppDeps): Express {
+export function createApp({ sequelize, config, mailer, serveWeb = false, log, commitHooks, importPool, rateLimits }: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
+  // One proxy in front (see TRUST_PROXY in the README for the risk when clients can bypass it).
   if (config.trustProxy) app.set('trust proxy', 1);
+  app.use(securityHeaders(config));
+  const pool = importPool ?? createImportPool(config.importThreads);
+  if (!importPool) pools.set(app, pool);
 
   const api = express.Router();
   api.use(express.json({ limit: '1mb' }));
@@ -42,14 +60,14 @@ export function createApp({ sequelize, config, mailer, serveWeb = false, log, co
     next();
   });
   api.use('/health', healthRouter(sequelize));
-  api.use(authRouter(config, mailer ?? createMailer(config.mail.smtpUrl, config.mail.from)));
+  api.use(authRouter(config, mailer ?? createMailer(config.mail.smtpUrl, config.mail.from), rateLimits ?? createRateLimits(sequelize, config)));
   // Everything below needs a signed-in user; each service checks role and shop again.
   api.use(['/players', '/fittings', '/team', '/recipes', '/bay-files', '/shots', '/builds'], authenticate(config));
   api.use('/players', playersRouter());
   api.use('/fittings', fittingsRouter());
   api.use('/team', teamRouter());
   api.use('/recipes', recipesRouter());
-  api.use(bayFilesRouter(sequelize, config, commitHooks));
+  api.use(bayFilesRouter(sequelize, config, pool, commitHooks));
   api.use(shotsRouter(sequelize));
   api.use(apiNotFound);
   app.use('/api', api);

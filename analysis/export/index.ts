@@ -1,1 +1,2 @@
 export { csvCell, csvLine } from './csv-cell';
+export { neutraliseCsv } from './neutralise-csv';

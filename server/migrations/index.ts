@@ -2,6 +2,7 @@ import type { QueryInterface } from 'sequelize';
 import * as m0001 from './0001-foundation';
 import * as m0002 from './0002-bay-files';
 import * as m0003 from './0003-password-resets';
+import * as m0006 from './0006-hardening';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -10,4 +11,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '0001-foundation', ...m0001 },
   { name: '0002-bay-files', ...m0002 },
   { name: '0003-password-resets', ...m0003 },
+  { name: '0006-hardening', ...m0006 },
 ];

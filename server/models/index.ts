@@ -5,10 +5,11 @@ import { Fitting } from './fitting';
 import { PasswordReset } from './password-reset';
 import { Player } from './player';
 import { Recipe } from './recipe';
+import { Session } from './session';
 import { Shop } from './shop';
 import { User } from './user';
 
-export { BayFile, Build, Fitting, PasswordReset, Player, Recipe, Shop, User };
+export { BayFile, Build, Fitting, PasswordReset, Player, Recipe, Session, Shop, User };
 
 /** Registers every model and association on one Sequelize instance. */
 export function initModels(sequelize: Sequelize): void {
@@ -20,6 +21,7 @@ export function initModels(sequelize: Sequelize): void {
   Recipe.initModel(sequelize);
   Build.initModel(sequelize);
   PasswordReset.initModel(sequelize);
+  Session.initModel(sequelize);
 
   Shop.hasMany(User, { foreignKey: 'shopId' });
   User.belongsTo(Shop, { foreignKey: 'shopId', as: 'shop' });
@@ -37,6 +39,8 @@ export function initModels(sequelize: Sequelize): void {
   Build.belongsTo(Fitting, { foreignKey: 'fittingId' });
   User.hasMany(PasswordReset, { foreignKey: 'userId' });
   PasswordReset.belongsTo(User, { foreignKey: 'userId' });
+  User.hasMany(Session, { foreignKey: 'userId' });
+  Session.belongsTo(User, { foreignKey: 'userId' });
   Shop.hasMany(Recipe, { foreignKey: 'shopId' });
   Recipe.belongsTo(Shop, { foreignKey: 'shopId' });
   Recipe.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });

@@ -6,12 +6,15 @@ export const SESSION_COOKIE = 'ovy_session';
 
 export interface TokenClaims {
   sub: string;
+  /** The user's token version when signed (raised to end every session at once). */
   ver: number;
+  /** The server-side session (sessions table), ended at sign-out. */
+  sid: string;
 }
 
-/** Signs a session token: HS256, with expiry. */
+/** Signs a session token: HS256, with issue time and expiry. */
 export function signSessionToken(config: Config, claims: TokenClaims): string {
-  return jwt.sign({ ver: claims.ver }, config.jwt.secret, {
+  return jwt.sign({ ver: claims.ver, sid: claims.sid }, config.jwt.secret, {
     algorithm: 'HS256',
     expiresIn: config.jwt.ttl as jwt.SignOptions['expiresIn'],
     subject: claims.sub,
@@ -19,14 +22,30 @@ export function signSessionToken(config: Config, claims: TokenClaims): string {
   });
 }
 
-/** Verifies a session token with an explicit algorithm list; throws 401 when it is not valid. */
+/**
+ * Verifies a session token: explicit algorithm list, issuer, and at most the configured age
+ * (JWT_TTL) since it was issued, whatever `exp` it claims — a token without `iat`, or signed
+ * with a longer expiry, is refused. Throws 401 when it is not valid.
+ */
 export function verifySessionToken(config: Config, token: string): TokenClaims {
   try {
-    const payload = jwt.verify(token, config.jwt.secret, { algorithms: ['HS256'], issuer: 'ovalyard' });
-    if (typeof payload === 'string' || typeof payload.sub !== 'string') throw new Error('bad payload');
-    return { sub: payload.sub, ver: Number(payload.ver ?? 0) };
+    const payload = jwt.verify(token, config.jwt.secret, { algorithms: ['HS256'], issuer: 'ovalyard', maxAge: config.jwt.ttl });
+    if (typeof payload === 'string' || typeof payload.sub !== 'string' || typeof payload.sid !== 'string' || typeof payload.exp !== 'number') {
+      throw new Error('bad payload');
+    }
+    return { sub: payload.sub, ver: Number(payload.ver ?? 0), sid: payload.sid };
   } catch {
     throw unauthenticated('Your session has ended. Sign in again.');
+  }
+}
+
+/** The claims of a token if it verifies, else null (sign-out needs no valid session). */
+export function readSessionToken(config: Config, token: string | undefined): TokenClaims | null {
+  if (!token) return null;
+  try {
+    return verifySessionToken(config, token);
+  } catch {
+    return null;
   }
 }
 
