@@ -1,5 +1,5 @@
 import type { Server } from 'node:http';
-import { createApp } from './app';
+import { closeApp, createApp } from './app';
 import { loadConfig } from './config';
 import { createSequelize } from './db';
 import { migrateUp } from './migrate';
@@ -27,7 +27,9 @@ async function main(): Promise<void> {
   const shutdown = (signal: string) => {
     console.log(`\n${signal}: stopping the server…`);
     server.close(() => {
-      void sequelize.close().finally(() => process.exit(0));
+      void closeApp(app)
+        .then(() => sequelize.close())
+        .finally(() => process.exit(0));
     });
     const force = setTimeout(() => process.exit(0), 5000) as unknown as { unref?: () => void };
     force.unref?.();

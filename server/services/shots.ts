@@ -2,6 +2,7 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import { notFound } from '../errors';
 import { type Actor, requireStaff } from './actor';
 import { findVisibleFitting } from './fittings';
+import { renameNotFound } from './not-found';
 import { loadFittingShots, type StoredShot } from './shot-store';
 
 export async function listShots(sequelize: Sequelize, actor: Actor, fittingId: string): Promise<StoredShot[]> {
@@ -17,9 +18,7 @@ export async function setShotDecision(sequelize: Sequelize, actor: Actor, shotId
     type: QueryTypes.SELECT,
   });
   if (!rows[0]) throw notFound('That shot');
-  await findVisibleFitting(actor, rows[0].fitting_id).catch(() => {
-    throw notFound('That shot');
-  });
+  await renameNotFound(findVisibleFitting(actor, rows[0].fitting_id), 'That shot');
   await sequelize.query('UPDATE shots SET decision = ? WHERE id = ?', { replacements: [decision, shotId], type: QueryTypes.UPDATE });
   return { id: shotId, decision };
 }
