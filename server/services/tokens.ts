@@ -30,8 +30,10 @@ export function signSessionToken(config: Config, claims: TokenClaims): string {
 export function verifySessionToken(config: Config, token: string): TokenClaims {
   try {
     const payload = jwt.verify(token, config.jwt.secret, { algorithms: ['HS256'], issuer: 'ovalyard', maxAge: config.jwt.ttl });
-    if (typeof payload === 'string' || typeof payload.sub !== 'string' || typeof payload.sid !== 'string' || typeof payload.exp !== 'number') {
-      throw new Error('bad payload');
+    if (typeof payload === 'string' || typeof payload.sub !== 'string' || typeof payload.sid !== 'string') throw new Error('bad payload');
+    // an expiry further out than the configured session length was not signed by this server's rules
+    if (typeof payload.exp !== 'number' || typeof payload.iat !== 'number' || (payload.exp - payload.iat) * 1000 > ttlMs(config.jwt.ttl)) {
+      throw new Error('expiry beyond the configured age');
     }
     return { sub: payload.sub, ver: Number(payload.ver ?? 0), sid: payload.sid };
   } catch {
