@@ -8,7 +8,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 
 const ROOT = path.resolve(__dirname, '../..');
-const SOURCES = ['app', 'components', 'analysis', 'server/schemas', 'assets', 'app.json', 'package-lock.json', 'tsconfig.json'];
+const SOURCES = ['index.ts', 'package.json', 'app', 'components', 'analysis', 'server/schemas', 'assets', 'app.json', 'package-lock.json', 'tsconfig.json'];
 
 function walk(p: string, out: string[]): void {
   if (!fs.existsSync(p)) return;
