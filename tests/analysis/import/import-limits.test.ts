@@ -17,6 +17,12 @@ describe('importBayFile on very wide rows', () => {
     expect(r.shots.map((s) => s.row)).toEqual([1, 2]);
   });
 
+  it('a club followed by 138,000 commas (the issue\'s row) is read as a row, not a stack overflow', () => {
+    const r = importBayFile(`Club,Carry (m)\n7 Iron,150\n7 Iron${','.repeat(138_000)}\n`);
+    expect(r.shots).toHaveLength(1);
+    expect(r.rejected).toEqual([{ row: 2, line: 3, reason: 'the row has no shot values' }]);
+  });
+
   it('a file whose rows are 69,000 cells wide throws TOO_MANY_COLUMNS', () => {
     const text = `Club,Carry (m),Spin (rpm)\n7 Iron,150,6500\n${'1,'.repeat(69_000)}\n`;
     expect(codeOf(() => importBayFile(text))).toBe('TOO_MANY_COLUMNS');
