@@ -20,7 +20,8 @@ export async function requestPasswordReset(email: string, appUrl: string, mailer
   const user = await User.findOne({ where: { email, active: true } });
   if (!user) return;
   const token = randomBytes(32).toString('base64url');
-  await PasswordReset.create({ userId: user.id, tokenHash: sha256(token), expiresAt: new Date(now.getTime() + RESET_LINK_TTL_MS), usedAt: null });
+  // created and expiring by one clock reading, so the link lasts exactly RESET_LINK_TTL_MS
+  await PasswordReset.create({ userId: user.id, tokenHash: sha256(token), expiresAt: new Date(now.getTime() + RESET_LINK_TTL_MS), usedAt: null, createdAt: now });
   const link = `${appUrl.replace(/\/$/, '')}/reset?token=${token}`;
   await mailer.send({
     to: user.email,
