@@ -41,6 +41,8 @@ export const INCH_M = 0.0254;
 export const MPH_MPS = 0.44704;
 export const KMH_MPS = 1 / 3.6;
 export const RPM_RAD_PER_S = Math.PI / 30;
+/** Degrees in one radian (180/π, from the definition of the radian). */
+export const DEG_PER_RAD = 180 / Math.PI;
 
 /** Every unit Ovalyard reads, grouped by dimension. */
 export const UNITS: readonly UnitInfo[] = [
@@ -60,7 +62,7 @@ export const UNITS: readonly UnitInfo[] = [
     aliases: ['ft', 'feet', 'foot', "'"] },
   { unit: 'deg', dimension: 'angle', factor: 1, label: '°',
     aliases: ['deg', 'degs', 'degree', 'degrees', '°', 'º', '˚'] },
-  { unit: 'rad', dimension: 'angle', factor: 180 / Math.PI, label: 'rad',
+  { unit: 'rad', dimension: 'angle', factor: DEG_PER_RAD, label: 'rad',
     aliases: ['rad', 'radian', 'radians'] },
   { unit: 'rpm', dimension: 'spin', factor: 1, label: 'rpm',
     aliases: ['rpm', 'r/min', 'rev/min', 'revs/min', 'revolutions per minute'] },

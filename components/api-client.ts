@@ -89,10 +89,13 @@ export function errorMessage(error: unknown): string {
   return 'Something went wrong. Try again.';
 }
 
-/** Field errors from a VALIDATION_FAILED answer's details ({ path, message }[]), by first path key. */
+/** Answers whose details name the fields at fault: a body that fails its schema, a password too easy to guess. */
+const FIELD_ERROR_CODES = new Set(['VALIDATION_FAILED', 'WEAK_PASSWORD']);
+
+/** Field errors from a VALIDATION_FAILED or WEAK_PASSWORD answer's details ({ path, message }[]), by first path key. */
 export function fieldErrorsFromApi(error: unknown): Record<string, string> {
   const out: Record<string, string> = {};
-  if (!(error instanceof ApiError) || error.code !== 'VALIDATION_FAILED' || !error.details) return out;
+  if (!(error instanceof ApiError) || !FIELD_ERROR_CODES.has(error.code) || !error.details) return out;
   for (const d of error.details) {
     if (d && typeof d === 'object' && 'path' in d && 'message' in d) {
       const key = Array.isArray(d.path) && d.path.length > 0 ? String(d.path[0]) : '';

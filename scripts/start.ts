@@ -24,6 +24,8 @@ function keptSecret(name: string): string {
 
 async function main() {
   const dbPort = Number(process.env.DB_PORT ?? 3307);
+  const host = process.env.HOST ?? '127.0.0.1';
+  const port = Number(process.env.PORT ?? 8080);
   const db = await startPrivateMariadb({
     dataDir: path.join(DATA, 'mariadb'),
     port: dbPort,
@@ -67,8 +69,9 @@ async function main() {
       DB_USER: db.user,
       DB_PASSWORD: db.password,
       JWT_SECRET: process.env.JWT_SECRET ?? keptSecret('jwt-secret'),
-      // Served over plain http on this machine; behind TLS set COOKIE_SECURE=1.
-      COOKIE_SECURE: process.env.COOKIE_SECURE ?? '0',
+      // E-mailed links point here; behind a proxy or a name set APP_URL (https://… makes cookies Secure).
+      APP_URL: process.env.APP_URL ?? `http://${host === '0.0.0.0' ? '127.0.0.1' : host}:${port}`,
+      // COOKIE_SECURE is left to the server: Secure whenever a request comes over HTTPS or APP_URL is https.
       DEMO_SEED: process.env.DEMO_SEED ?? '1',
       WEB_DIST: path.join(ROOT, 'dist'),
       ...(inbox ? { SMTP_URL: inbox.smtpUrl } : {}),

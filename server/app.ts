@@ -23,7 +23,10 @@ import { specSheetsRouter } from './routes/spec-sheets';
 import { teamRouter } from './routes/team';
 import { workshopSettingsRouter } from './routes/workshop-settings';
 import { AnalysisCache } from './services/analysis-cache';
+import { createRateLimits, type RateLimits } from './middleware/rate-limit';
+import { securityHeaders } from './middleware/security-headers';
 import type { CommitHooks } from './services/bay-files';
+import { createImportPool, type ImportPool } from './services/import-pool';
 import { createMailer, type Mailer } from './services/mailer';
 
 export interface AppDeps {
@@ -35,6 +38,17 @@ export interface AppDeps {
   log?: (message: string, error: unknown) => void;
   /** Test hooks into the bay-file commit (failure injection). */
   commitHooks?: CommitHooks;
+  /** Worker threads for bay files; by default a pool of config.importThreads (close it with closeApp). */
+  importPool?: ImportPool;
+  /** Rate limiters; by default kept in this database's rate_limits table. */
+  rateLimits?: RateLimits;
+}
+
+const pools = new WeakMap<Express, ImportPool>();
+
+/** Ends what createApp started for an app (its import worker pool, unless one was passed in). */
+export async function closeApp(app: Express): Promise<void> {
+  await pools.get(app)?.close();
 }
 
 /** An exported asset's name with its content hash ("inter-latin-400-normal.<md5>.woff2", "icon.<md5>@2x.png"). */
@@ -51,12 +65,16 @@ function staticCacheHeaders(res: express.Response, filePath: string): void {
 }
 
 /** Builds the Express app; listening is the caller's business (server/index.ts, tests). */
-export function createApp({ sequelize, config, mailer, serveWeb = false, log, commitHooks }: AppDeps): Express {
+export function createApp({ sequelize, config, mailer, serveWeb = false, log, commitHooks, importPool, rateLimits }: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
+  // One proxy in front (see TRUST_PROXY in the README for the risk when clients can bypass it).
   if (config.trustProxy) app.set('trust proxy', 1);
+  app.use(securityHeaders(config));
   // gzip or brotli for API answers and the web app's files (prepared answers come compressed already).
   app.use(compression());
+  const pool = importPool ?? createImportPool(config.importThreads);
+  if (!importPool) pools.set(app, pool);
 
   const api = express.Router();
   api.use(express.json({ limit: '1mb' }));
@@ -68,7 +86,7 @@ export function createApp({ sequelize, config, mailer, serveWeb = false, log, co
   api.use('/health', healthRouter(sequelize));
   const mail = mailer ?? createMailer(config.mail.smtpUrl, config.mail.from);
   api.use('/demo', demoRouter());
-  api.use(authRouter(config, mail));
+  api.use(authRouter(config, mail, rateLimits ?? createRateLimits(sequelize, config)));
   // Everything below needs a signed-in user; each service checks role and shop again.
   api.use(['/players', '/fittings', '/team', '/recipes', '/bay-files', '/shots', '/builds', '/bag-clubs', '/spec-sheets', '/workshop-settings', '/shop'], authenticate(config));
   api.use('/players', playersRouter());
@@ -76,7 +94,7 @@ export function createApp({ sequelize, config, mailer, serveWeb = false, log, co
   api.use('/team', teamRouter());
   api.use('/recipes', recipesRouter());
   api.use('/shop', shopMarginsRouter());
-  api.use(bayFilesRouter(sequelize, config, commitHooks));
+  api.use(bayFilesRouter(sequelize, config, pool, commitHooks));
   api.use(shotsRouter(sequelize, new AnalysisCache(config.analysisCacheBytes)));
   api.use(bagsRouter(sequelize));
   api.use(chosenBuildsRouter());

@@ -20,13 +20,15 @@ const envSchema = z
     JWT_TTL: z.string().regex(/^\d+[smhd]$/, 'JWT_TTL like 8h or 30m').default('8h'),
     COOKIE_SECURE: boolFromEnv.optional(),
     SIGN_IN_LIMIT: z.coerce.number().int().min(1).default(10),
+    SIGN_IN_ACCOUNT_LIMIT: z.coerce.number().int().min(1).default(10),
     SIGN_IN_WINDOW_MIN: z.coerce.number().min(0.01).default(15),
+    IMPORT_THREADS: z.coerce.number().int().min(1).max(16).default(1),
     WEB_DIST: z.string().default('dist'),
     UPLOAD_MAX_BYTES: z.coerce.number().int().min(1024).default(20 * 1024 * 1024),
     UPLOAD_MAX_ROWS: z.coerce.number().int().min(1).default(200_000),
     SMTP_URL: z.string().optional(),
     MAIL_FROM: z.string().default('Ovalyard <no-reply@ovalyard.invalid>'),
-    APP_URL: z.string().optional(),
+    APP_URL: z.url({ protocol: /^https?$/, message: 'APP_URL must be an http(s) address like https://fit.example.com' }).optional(),
     TRUST_PROXY: boolFromEnv.default(false),
     WORKERS: z.coerce.number().int().min(1).max(64).default(1),
     ANALYSIS_CACHE_MB: z.coerce.number().min(0).max(4096).default(64),
@@ -37,6 +39,9 @@ const envSchema = z
       ctx.addIssue({ code: 'custom', path: ['JWT_SECRET'], message: 'JWT_SECRET is required in production' });
     } else if (env.JWT_SECRET === DEV_JWT_SECRET) {
       ctx.addIssue({ code: 'custom', path: ['JWT_SECRET'], message: 'JWT_SECRET must not be the development secret' });
+    }
+    if (!env.APP_URL) {
+      ctx.addIssue({ code: 'custom', path: ['APP_URL'], message: 'APP_URL is required in production (the address written into e-mailed links)' });
     }
     if (env.DB_PASSWORD === 'ovalyard-dev') {
       ctx.addIssue({ code: 'custom', path: ['DB_PASSWORD'], message: 'DB_PASSWORD must be set in production' });
@@ -49,12 +54,20 @@ export interface Config {
   port: number;
   db: { host: string; port: number; name: string; user: string; password: string };
   jwt: { secret: string; ttl: string };
-  cookieSecure: boolean;
-  signIn: { limit: number; windowMs: number };
+  /**
+   * Secure cookies: true, false, or 'auto' (the default): secure whenever the request came over
+   * HTTPS (directly, or through a trusted proxy's X-Forwarded-Proto) or APP_URL is https.
+   */
+  cookieSecure: boolean | 'auto';
+  /** Sign-in attempts per client address, and failed sign-ins per account, per window. */
+  signIn: { limit: number; accountLimit: number; windowMs: number };
+  /** Worker threads that parse, map and validate bay files. */
+  importThreads: number;
   webDist: string;
   upload: { maxBytes: number; maxRows: number };
   mail: { smtpUrl: string | null; from: string };
-  appUrl: string | null;
+  /** The address written into e-mailed links: APP_URL, or this server's own address outside production. */
+  appUrl: string;
   trustProxy: boolean;
   /** Server processes on this machine (Node's cluster); 1 runs without one. */
   workers: number;
@@ -79,12 +92,14 @@ export function loadConfig(source: Record<string, string | undefined> = process.
     port: e.PORT,
     db: { host: e.DB_HOST, port: e.DB_PORT, name: e.DB_NAME, user: e.DB_USER, password: e.DB_PASSWORD },
     jwt: { secret: e.JWT_SECRET ?? DEV_JWT_SECRET, ttl: e.JWT_TTL },
-    cookieSecure: e.COOKIE_SECURE ?? e.NODE_ENV === 'production',
-    signIn: { limit: e.SIGN_IN_LIMIT, windowMs: e.SIGN_IN_WINDOW_MIN * 60_000 },
+    cookieSecure: e.COOKIE_SECURE ?? 'auto',
+    signIn: { limit: e.SIGN_IN_LIMIT, accountLimit: e.SIGN_IN_ACCOUNT_LIMIT, windowMs: e.SIGN_IN_WINDOW_MIN * 60_000 },
+    importThreads: e.IMPORT_THREADS,
     webDist: e.WEB_DIST,
     upload: { maxBytes: e.UPLOAD_MAX_BYTES, maxRows: e.UPLOAD_MAX_ROWS },
     mail: { smtpUrl: e.SMTP_URL ?? null, from: e.MAIL_FROM },
-    appUrl: e.APP_URL ?? null,
+    // Links never come from the request's Host header (it is the client's to choose).
+    appUrl: (e.APP_URL ?? `http://${e.HOST === '0.0.0.0' ? '127.0.0.1' : e.HOST}:${e.PORT}`).replace(/\/+$/, ''),
     trustProxy: e.TRUST_PROXY,
     workers: e.WORKERS,
     analysisCacheBytes: Math.round(e.ANALYSIS_CACHE_MB * 1024 * 1024),

@@ -1,5 +1,5 @@
 import type { Server } from 'node:http';
-import { createApp } from './app';
+import { closeApp, createApp } from './app';
 import { isFirstServer, runCluster } from './cluster';
 import { loadConfig, type Config } from './config';
 import { createSequelize } from './db';
@@ -42,7 +42,9 @@ async function serve(config: Config): Promise<void> {
     stopping = true;
     if (isFirstServer()) console.log(`\n${signal}: stopping the server…`);
     server.close(() => {
-      void sequelize.close().finally(() => process.exit(0));
+      void closeApp(app)
+        .then(() => sequelize.close())
+        .finally(() => process.exit(0));
     });
     const force = setTimeout(() => process.exit(0), 5000) as unknown as { unref?: () => void };
     force.unref?.();

@@ -5,9 +5,9 @@
  * it right); faceToPath = faceAngle − clubPath; spinLoft = dynamicLoft − attackAngle.
  */
 import { SHOT_FIELDS, type ShotField, type ShotValues } from '@/analysis/fields';
+import { DEG_PER_RAD } from '@/analysis/units';
 import { newSlots, SLOT, slotsFromValues, valuesFromSlots } from './shot-slots';
 
-const DEG_PER_RAD = 180 / Math.PI;
 const { ballSpeed, clubSpeed, smashFactor, backSpin, sideSpin, spinRate, spinAxis, faceAngle, clubPath, faceToPath, dynamicLoft, attackAngle, spinLoft } = SLOT;
 
 /**

@@ -19,10 +19,11 @@ export interface ParsedHeader {
   side: SideNotation | 'lettered' | null;
 }
 
-const GROUP = /[([{]([^)\]}]*)[)\]}]/g;
+// A bracketed group holds no other bracket, so each scan stops at the next one: linear in the header.
+const GROUP = /[([{]([^()[\]{}]*)[)\]}]/g;
 // "R+", "+R", "+ = right", "right is +", "right positive", "L-" (not "L-R"), "-L", "- = left"
-const RIGHT_POSITIVE = /(\br\s*\+|\+\s*=?\s*r(ight)?\b|\bright\s*(is\s*)?(\+|positive)|\bl\s*-(?!\s*\/?\s*r\b)|(?<![a-z]\s?)-l(eft)?\b|-\s*=\s*l(eft)?\b|\bleft\s*(is\s*)?(-|negative))/i;
-const LEFT_POSITIVE = /(\bl\s*\+|\+\s*=?\s*l(eft)?\b|\bleft\s*(is\s*)?(\+|positive)|\br\s*-(?!\s*\/?\s*l\b)|(?<![a-z]\s?)-r(ight)?\b|-\s*=\s*r(ight)?\b|\bright\s*(is\s*)?(-|negative))/i;
+const RIGHT_POSITIVE = /(\br\s*\+|\+\s*(?:=\s*)?r(ight)?\b|\bright\s*(is\s*)?(\+|positive)|\bl\s*-(?!\s*\/?\s*r\b)|(?<![a-z]\s?)-l(eft)?\b|-\s*=\s*l(eft)?\b|\bleft\s*(is\s*)?(-|negative))/i;
+const LEFT_POSITIVE = /(\bl\s*\+|\+\s*(?:=\s*)?l(eft)?\b|\bleft\s*(is\s*)?(\+|positive)|\br\s*-(?!\s*\/?\s*l\b)|(?<![a-z]\s?)-r(ight)?\b|-\s*=\s*r(ight)?\b|\bright\s*(is\s*)?(-|negative))/i;
 const LETTERED = /^(l\s*\/\s*r|r\s*\/\s*l|lr|left\s*\/\s*right|right\s*\/\s*left|l or r|left or right)$/i;
 
 function sideHint(text: string): SideNotation | 'lettered' | null {
@@ -82,7 +83,7 @@ export function parseHeader(header: string): ParsedHeader {
   }
   if (!unit) {
     // a unit written after the name: "Carry yds", "Ball Speed mph", "Speed - km/h"
-    const m = /^(.*\S)\s+[-–]?\s*(\S+)\s*$/.exec(rest.trim());
+    const m = /^(.*\S)\s+(?:[-–]\s*)?(\S+)$/.exec(rest.trim());
     if (m) {
       const found = findUnit(m[2]);
       if (found && normaliseWords(m[1]) !== '') {

@@ -7,7 +7,8 @@ export type ImportErrorCode =
   | 'UNKNOWN_UNIT'
   | 'UNIT_MISMATCH'
   | 'BAD_RECIPE'
-  | 'BAD_CELL';
+  | 'BAD_CELL'
+  | 'TOO_MANY_COLUMNS';
 
 /**
  * The error every import function throws for input it cannot use. Branch on `code`, never on

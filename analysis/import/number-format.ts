@@ -8,6 +8,12 @@ import { findUnit, type UnitInfo } from '@/analysis/units';
 
 export type DecimalMark = '.' | ',';
 
+/**
+ * The longest cell the careful readers look at (characters, after trimming): far more than any
+ * number with a unit ("-1.234.567,89 km/h") needs; a longer cell is not a number.
+ */
+export const MAX_NUMBER_CELL = 64;
+
 /** Cells that mean "no value" (compared trimmed and lower-cased). */
 const MISSING = new Set(['', '-', '--', '---', '—', '–', 'n/a', 'na', '#n/a', 'null', 'none', 'nan', '?']);
 
@@ -42,7 +48,9 @@ export function isFormulaLike(cell: string): boolean {
   return false;
 }
 
-const PLAIN_NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
+// Every pattern below is anchored and unambiguous (no two quantifiers compete for one run of
+// characters), so its cost is linear in the cell; cells are also cut off at MAX_NUMBER_CELL.
+const PLAIN_NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
 const NUMBER_THEN_SUFFIX = /^([+-]?[\d.,' ]*\d\.?)\s*([^\d\s.,][^\d]*)$/;
 
 /**
@@ -56,6 +64,10 @@ export function readNumberSlow(cell: string, decimal: DecimalMark, thousands: st
   state.error = null;
   state.unit = null;
   let t = cell.trim();
+  if (t.length > MAX_NUMBER_CELL) {
+    state.error = `"${clip(t)}" is too long to be a number (more than ${MAX_NUMBER_CELL} characters)`;
+    return NaN;
+  }
   if (MISSING.has(t.toLowerCase())) return NaN;
   if (isFormulaLike(t)) {
     state.error = `formula-looking cell "${clip(cell)}" (not evaluated)`;
@@ -166,7 +178,13 @@ export interface NumberFormat {
 }
 
 const NUMERIC_SHAPE = /^[+-]?[\d.,]*\d$/;
-const SIDE_OR_UNIT = /^\s*(?:l|r|left|right)?\s*([+\-\u2212]?[\d.,]*\d)\s*(?:°|º|[a-z/]{1,5}|left|right)?\s*$/i;
+/** On a trimmed cell: an optional side word, a number, an optional degree sign, unit or side word. */
+const SIDE_OR_UNIT = /^(?:(?:l|r|left|right)\s*)?([+\-\u2212]?[\d.,]*\d)(?:\s*(?:°|º|[a-z/]{1,5}|left|right))?$/i;
+
+function sideOrUnit(cell: string): RegExpExecArray | null {
+  const t = cell.trim();
+  return t.length > MAX_NUMBER_CELL ? null : SIDE_OR_UNIT.exec(t);
+}
 
 /**
  * Decide the decimal mark and thousands separator from sample cells. A cell with both marks
@@ -179,7 +197,7 @@ export function detectNumberFormat(cells: readonly string[], delimiter: string):
   const thousandsVotes = { '.': 0, ',': 0 };
   const threeDigits = { '.': 0, ',': 0 };
   for (const raw of cells) {
-    const m = SIDE_OR_UNIT.exec(raw);
+    const m = sideOrUnit(raw);
     if (!m) continue;
     const t = m[1].replace(/^[+\-\u2212]/, '');
     if (!NUMERIC_SHAPE.test(t)) continue;
@@ -223,7 +241,7 @@ export function detectNumberFormat(cells: readonly string[], delimiter: string):
  * "56°"). Used to tell header lines from data lines. O(cell length).
  */
 export function looksNumeric(cell: string): boolean {
-  return SIDE_OR_UNIT.test(cell);
+  return sideOrUnit(cell) !== null;
 }
 
 function clip(s: string): string {

@@ -5,6 +5,7 @@
 import { z } from 'zod';
 import { SHOT_FIELDS, SIDE_FIELDS, type ShotField } from '@/analysis/fields';
 import { fieldDimension, findUnit } from '@/analysis/units';
+import { MAX_COLUMNS, MAX_HEADER_CHARS } from './import-limits';
 
 /**
  * How a left/right value is written. '+' is right in Ovalyard.
@@ -88,6 +89,8 @@ export const recipeSchema: z.ZodType<Recipe> = z
     delimiter: z.enum([',', ';', '\t']).optional(),
     decimal: z.enum(['.', ',']).optional(),
     headerRow: z.number().int().min(0).max(10_000).optional(),
-    columns: z.record(z.string().max(200), columnSchema),
+    columns: z
+      .record(z.string().max(MAX_HEADER_CHARS), columnSchema)
+      .refine((columns) => Object.keys(columns).length <= MAX_COLUMNS, { message: `A recipe maps at most ${MAX_COLUMNS} columns` }),
   })
   .strict();

@@ -28,9 +28,11 @@ export function isSummaryRow(cells: readonly string[]): boolean {
   return false;
 }
 
-/** A units-row cell without its brackets: "(mph)" → "mph". */
+/** A units-row cell without its brackets: "(mph)" → "mph". O(cell length). */
 export function unitCellText(cell: string): string {
-  return cell.trim().replace(/^[([{]\s*(.*?)\s*[)\]}]$/, '$1');
+  const t = cell.trim();
+  // by hand rather than /^[([{]\s*(.*?)\s*[)\]}]$/, whose lazy middle backtracks over white space
+  return t.length >= 2 && '([{'.includes(t[0]) && ')]}'.includes(t[t.length - 1]) ? t.slice(1, -1).trim() : t;
 }
 
 /**

@@ -6,15 +6,36 @@ import { ImportError } from './import-error';
 import { compileNumberReader, newCellState, quickDecimalRange, type CellState, type DecimalMark, type NumberReader } from './number-format';
 import type { SideNotation } from './recipe';
 
-const PREFIX = /^(left|right|l|r)(?![a-z])\.?\s*(.*)$/i;
-const SUFFIX = /^(.*?)\s*(?<![a-z])(left|right|l|r)\.?$/i;
+// Anchored, one way to match each character: linear in the cell (no backtracking between runs).
+const PREFIX = /^(left|right|l|r)(?![a-z])\.?\s*([\s\S]*)$/i;
+/** Side words, longest first, so "left" wins over "l". */
+const SIDE_WORDS = ['right', 'left', 'r', 'l'] as const;
 
-/** Where a left/right mark sits in a cell, if it has one. */
+function isAsciiLetter(code: number): boolean {
+  const c = code | 32;
+  return c >= 97 && c <= 122;
+}
+
+/** A side word ending the trimmed cell (before an optional "."), not preceded by a letter. O(1). */
+function suffixMark(t: string): { mark: 'L' | 'R'; rest: string } | null {
+  const end = t.charCodeAt(t.length - 1) === 46 /* . */ ? t.length - 1 : t.length;
+  const tail = t.slice(Math.max(0, end - 5), end).toLowerCase();
+  for (const word of SIDE_WORDS) {
+    if (!tail.endsWith(word)) continue;
+    const start = end - word.length;
+    if (start > 0 && isAsciiLetter(t.charCodeAt(start - 1))) continue;
+    const rest = t.slice(0, start).trimEnd();
+    return rest === '' ? null : { mark: word[0].toUpperCase() as 'L' | 'R', rest };
+  }
+  return null;
+}
+
+/** Where a left/right mark sits in a cell, if it has one. O(cell length). */
 export function sideMark(cell: string): { mark: 'L' | 'R'; rest: string; position: 'prefix' | 'suffix' } | null {
   const t = cell.trim();
-  let m = SUFFIX.exec(t);
-  if (m && m[1] !== '') return { mark: m[2][0].toUpperCase() as 'L' | 'R', rest: m[1], position: 'suffix' };
-  m = PREFIX.exec(t);
+  const suffix = suffixMark(t);
+  if (suffix) return { ...suffix, position: 'suffix' };
+  const m = PREFIX.exec(t);
   if (m && m[2] !== '') return { mark: m[1][0].toUpperCase() as 'L' | 'R', rest: m[2], position: 'prefix' };
   return null;
 }

@@ -3,6 +3,7 @@
  * preamble lines, a units row right under the header. Reads only the head of the file.
  */
 import { ImportError } from './import-error';
+import { cutName, MAX_COLUMNS, MAX_HEADER_CHARS } from './import-limits';
 import { matchHeaderName, parseHeader } from './header-match';
 import { detectNumberFormat, looksNumeric, type DecimalMark } from './number-format';
 import { isBlankRow, isSummaryRow, isUnitsRow, unitCellText } from './row-kinds';
@@ -84,6 +85,13 @@ function isDataLike(cells: readonly string[], width: number, headerNumeric: numb
   return numeric >= 1 && numeric > headerNumeric && numeric >= filled * 0.2;
 }
 
+function tooManyColumns(width: number): ImportError {
+  return new ImportError(
+    'TOO_MANY_COLUMNS',
+    `This file has ${width.toLocaleString('en')} columns; one import reads at most ${MAX_COLUMNS.toLocaleString('en')}. Export fewer columns and try again.`,
+  );
+}
+
 interface Candidate {
   delimiter: Delimiter;
   headerIndex: number;
@@ -100,6 +108,7 @@ function findHeader(rows: string[][], delimiter: Delimiter, fixedHeader: number 
     if (fixedHeader === undefined && !isHeaderLike(cells)) continue;
     const width = filledWidth(cells);
     if (width < 1) continue;
+    if (width > MAX_COLUMNS) throw tooManyColumns(width);
     const headerNumeric = numericShare(cells).numeric;
     const unitsRow = i + 1 < rows.length && isUnitsRow(rows[i + 1]);
     let data = 0;
@@ -136,7 +145,7 @@ export function disambiguateHeaders(raw: readonly string[]): { headers: string[]
 
 /**
  * Sniff a bay file in full detail (used by suggestMapping and importBayFile). O(head of file).
- * @throws ImportError EMPTY_FILE, NOT_TEXT, NO_HEADER, NO_DATA_ROWS
+ * @throws ImportError EMPTY_FILE, NOT_TEXT, NO_HEADER, NO_DATA_ROWS, TOO_MANY_COLUMNS (over MAX_COLUMNS)
  */
 export function sniffDetail(input: string, hints: SniffHints = {}): SniffDetail {
   const text = stripBom(input);
@@ -172,14 +181,16 @@ export function sniffDetail(input: string, hints: SniffHints = {}): SniffDetail 
     if (isBlankRow(rows[i]) || isSummaryRow(rows[i])) continue;
     const w = filledWidth(rows[i]);
     widths.set(w, (widths.get(w) ?? 0) + 1);
-    if (sampleCells.length < 8000) sampleCells.push(...rows[i]);
+    // one cell at a time: spreading a row into push() overflows the stack on a very wide row
+    for (let c = 0; c < rows[i].length && sampleCells.length < 8000; c++) sampleCells.push(rows[i][c]);
   }
   if (headRows.every((r) => isBlankRow(r.cells) || isSummaryRow(r.cells)) && complete) {
     throw new ImportError('NO_DATA_ROWS', 'The file has a header but no shot rows.');
   }
   const modalWidth = [...widths.entries()].sort((a, b) => b[1] - a[1] || b[0] - a[0])[0]?.[0] ?? 0;
   const width = Math.max(filledWidth(headerCells), modalWidth);
-  const rawHeaders = Array.from({ length: width }, (_, i) => (headerCells[i] ?? '').trim());
+  if (width > MAX_COLUMNS) throw tooManyColumns(width);
+  const rawHeaders = Array.from({ length: width }, (_, i) => cutName(headerCells[i] ?? '', MAX_HEADER_CHARS));
   const { headers, duplicates } = disambiguateHeaders(rawHeaders);
   const unitCells = candidate.unitsRow ? rows[candidate.headerIndex + 1] : [];
   const units = headers.map((_, i) => {

@@ -137,6 +137,7 @@ export async function startPrivateMariadb(opts: PrivateMariadbOptions): Promise<
   const pidFile = path.join(dataDir, 'mysqld.pid');
   if (socket.length > 100) throw new Error(`socket path too long for a Unix socket: ${socket}`);
   fs.mkdirSync(dataDir, { recursive: true });
+  fs.chmodSync(dataDir, 0o700); // the socket (root's only way in) is reachable by this user only
 
   const userArgs = isRoot ? ['--user=root'] : [];
   if (!fs.existsSync(path.join(dataDir, 'mysql'))) {
@@ -200,10 +201,27 @@ export async function startPrivateMariadb(opts: PrivateMariadbOptions): Promise<
     ].join('; '),
   );
   if (!setup.ok) throw new Error(`creating the database and user failed: ${setup.out}`);
+  lockDownRoot(socket);
   if (started) log(`Private MariaDB started on 127.0.0.1:${opts.port} (data in ${dataDir}).`);
 
   const stop = () => shutdown(socket, pid);
   return { host: '127.0.0.1', port: opts.port, socket, database: db, user, password: opts.password, pid, startedHere: started, stop };
+}
+
+/**
+ * Root only through the socket: mariadb-install-db makes password-less root (and anonymous)
+ * accounts for 127.0.0.1, ::1 and the host name, which anyone on the machine could use over TCP.
+ * They are dropped (on every start, so older data directories are fixed too); root@localhost stays,
+ * and 'localhost' matches socket connections only (the server runs with --skip-name-resolve).
+ * The socket sits in the data directory, which only its owner may enter.
+ */
+function lockDownRoot(socket: string): void {
+  const list = sql(socket, "SELECT CONCAT(QUOTE(User), '@', QUOTE(Host)) FROM mysql.user WHERE (User = 'root' AND Host <> 'localhost') OR User = ''");
+  if (!list.ok) throw new Error(`listing MariaDB accounts failed: ${list.out}`);
+  const accounts = list.out.split('\n').map((l) => l.trim()).filter((l) => /^'[^']*'@'[^']*'$/.test(l));
+  if (accounts.length === 0) return;
+  const drop = sql(socket, `DROP USER ${accounts.join(', ')}; FLUSH PRIVILEGES`);
+  if (!drop.ok) throw new Error(`dropping MariaDB's TCP root accounts failed: ${drop.out}`);
 }
 
 /** Stops a private server found by its data directory, if one runs. */

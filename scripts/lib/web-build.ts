@@ -9,7 +9,7 @@ import path from 'node:path';
 import zlib from 'node:zlib';
 
 const ROOT = path.resolve(__dirname, '../..');
-const SOURCES = ['app', 'components', 'analysis', 'server/schemas', 'assets', 'app.json', 'metro.config.js', 'package-lock.json', 'tsconfig.json'];
+const SOURCES = ['index.ts', 'package.json', 'app', 'components', 'analysis', 'server/schemas', 'assets', 'app.json', 'metro.config.js', 'package-lock.json', 'tsconfig.json'];
 
 function walk(p: string, out: string[]): void {
   if (!fs.existsSync(p)) return;

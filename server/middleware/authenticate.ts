@@ -28,7 +28,7 @@ export function authenticate(config: Config): RequestHandler {
     if (found.fromCookie && UNSAFE.has(req.method) && req.get(CSRF_HEADER) !== '1') {
       throw new HttpError(403, 'CSRF_HEADER_MISSING', 'This request is missing its app header.');
     }
-    const actor = await loadActor(claims.sub, claims.ver);
+    const actor = await loadActor(claims.sub, claims.ver, claims.sid);
     if (!actor) throw unauthenticated('Your session has ended. Sign in again.');
     res.locals.actor = actor;
     next();

@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
-import { UniqueConstraintError, ForeignKeyConstraintError } from 'sequelize';
+import { ConnectionError, UniqueConstraintError, ForeignKeyConstraintError } from 'sequelize';
+import { isRetryable } from '../services/retry';
 import { ZodError } from 'zod';
 import { HttpError } from '../errors';
 
@@ -29,6 +30,12 @@ export function errorHandler(log: Logger = (m, e) => console.error(m, e)): Error
       status = 409;
       code = 'CONFLICT';
       message = 'That record is linked to another that does not exist or is still in use.';
+    } else if (err instanceof ConnectionError || isConnectionLoss(err) || isRetryable(err)) {
+      // the database is restarting or out of reach, or stayed deadlocked after retries: try again
+      status = 503;
+      code = 'UNAVAILABLE';
+      message = 'The database is not answering just now. Nothing was changed; try again in a moment.';
+      log(`${req.method} ${req.originalUrl} failed (database)`, err);
     } else if (err?.type === 'entity.too.large' || err?.status === 413) {
       status = 413;
       code = 'TOO_LARGE';
@@ -42,6 +49,14 @@ export function errorHandler(log: Logger = (m, e) => console.error(m, e)): Error
     }
     res.status(status).json({ error: { code, message, ...(details ? { details } : {}) } });
   };
+}
+
+/** A connection to MariaDB lost or refused, as the mariadb driver reports it. */
+function isConnectionLoss(err: unknown): boolean {
+  const e = (err as { parent?: unknown; original?: unknown } | null)?.parent ?? (err as { original?: unknown } | null)?.original ?? err;
+  const x = e as { fatal?: boolean; code?: string; sqlState?: string } | null;
+  if (!x) return false;
+  return x.fatal === true || x.code === 'ECONNREFUSED' || x.code === 'ER_SOCKET_UNEXPECTED_CLOSE' || x.code === 'ER_CONNECTION_TIMEOUT' || x.code === 'ER_GET_CONNECTION_TIMEOUT' || x.sqlState === '08S01';
 }
 
 /** 404 in the same format for unknown /api routes. */

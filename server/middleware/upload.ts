@@ -18,7 +18,9 @@ export function singleFileUpload(config: Config): RequestHandler {
         }
         return next(new HttpError(400, 'BAD_UPLOAD', `The upload could not be read (${err.code}). Send one file in the field "file".`));
       }
-      if (err) return next(err);
+      // Anything else the multipart parser reports is the request's fault: a body cut off before
+      // its end ("Unexpected end of form"), a missing boundary, a malformed part header.
+      if (err) return next(new HttpError(400, 'BAD_UPLOAD', 'The upload arrived incomplete or malformed. Send the file again.'));
       if (!req.file) return next(new HttpError(400, 'NO_FILE', 'Choose a bay file (CSV) to import.'));
       next();
     });

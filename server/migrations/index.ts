@@ -3,6 +3,7 @@ import * as m0001 from './0001-foundation';
 import * as m0002 from './0002-bay-files';
 import * as m0003 from './0003-password-resets';
 import * as m0004 from './0004-shop-margins';
+import * as m0006 from './0006-hardening';
 import * as m0005 from './0005-ground-firmness';
 import * as m0007 from './0007-bags-spec-sheets';
 import * as m0008 from './0008-fitting-revision';
@@ -16,6 +17,7 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '0003-password-resets', ...m0003 },
   { name: '0004-shop-margins', ...m0004 },
   { name: '0005-ground-firmness', ...m0005 },
+  { name: '0006-hardening', ...m0006 },
   { name: '0007-bags-spec-sheets', ...m0007 },
   { name: '0008-fitting-revision', ...m0008 },
 ];

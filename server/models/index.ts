@@ -8,13 +8,14 @@ import { Fitting } from './fitting';
 import { PasswordReset } from './password-reset';
 import { Player } from './player';
 import { Recipe } from './recipe';
+import { Session } from './session';
 import { Shop } from './shop';
 import { SpecSheetRecord } from './spec-sheet';
 import { ShopMargins } from './shop-margins';
 import { User } from './user';
 import { WorkshopSettingsRecord } from './workshop-settings';
 
-export { BayFile, Build, Fitting, PasswordReset, Player, Recipe, Shop, ShopMargins, User };
+export { BayFile, Build, Fitting, PasswordReset, Player, Recipe, Session, Shop, ShopMargins, User };
 export { BagClub, BagClubHistory, ChosenBuild, ChosenBuildConfirmation, ChosenTakeOut, SpecSheetRecord, WorkshopSettingsRecord };
 
 /** Registers every model and association on one Sequelize instance. */
@@ -29,6 +30,7 @@ export function initModels(sequelize: Sequelize): void {
   PasswordReset.initModel(sequelize);
   initBagModels(sequelize);
   ShopMargins.initModel(sequelize);
+  Session.initModel(sequelize);
 
   Shop.hasMany(User, { foreignKey: 'shopId' });
   User.belongsTo(Shop, { foreignKey: 'shopId', as: 'shop' });
@@ -46,6 +48,8 @@ export function initModels(sequelize: Sequelize): void {
   Build.belongsTo(Fitting, { foreignKey: 'fittingId' });
   User.hasMany(PasswordReset, { foreignKey: 'userId' });
   PasswordReset.belongsTo(User, { foreignKey: 'userId' });
+  User.hasMany(Session, { foreignKey: 'userId' });
+  Session.belongsTo(User, { foreignKey: 'userId' });
   Shop.hasMany(Recipe, { foreignKey: 'shopId' });
   Recipe.belongsTo(Shop, { foreignKey: 'shopId' });
   Recipe.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });

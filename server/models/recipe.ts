@@ -17,7 +17,7 @@ export class Recipe extends Model<InferAttributes<Recipe>, InferCreationAttribut
       {
         id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
         name: { type: DataTypes.STRING(120), allowNull: false },
-        recipe: { type: DataTypes.TEXT, allowNull: false },
+        recipe: { type: DataTypes.TEXT('medium'), allowNull: false },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

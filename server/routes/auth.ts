@@ -1,58 +1,83 @@
-import { Router, type CookieOptions } from 'express';
+import { Router, type CookieOptions, type Request } from 'express';
 import type { Config } from '../config';
 import { actorOf, authenticate } from '../middleware/authenticate';
-import { signInLimiter } from '../middleware/rate-limit';
+import { consumeOrRefuse, limitByAddress, refuseWhenSpent, type RateLimits } from '../middleware/rate-limit';
 import { forgotBodySchema, resetBodySchema, signInBodySchema, updateMeBodySchema } from '../schemas';
 import type { Mailer } from '../services/mailer';
 import { requestPasswordReset, resetPassword } from '../services/password-resets';
 import { describeMe, loadActor, signIn, signOutEverywhere, updateUnits } from '../services/auth';
-import { SESSION_COOKIE, signSessionToken, ttlMs } from '../services/tokens';
+import { endSession, pruneSessions, startSession } from '../services/sessions';
+import { readSessionToken, SESSION_COOKIE, signSessionToken, ttlMs } from '../services/tokens';
+import { HttpError } from '../errors';
 
-export function authRouter(config: Config, mailer: Mailer): Router {
+/** Whether cookies of this request get the Secure flag (see Config.cookieSecure). */
+export function secureCookies(config: Config, req: Request): boolean {
+  if (config.cookieSecure !== 'auto') return config.cookieSecure;
+  return req.secure || config.appUrl.startsWith('https:');
+}
+
+export function authRouter(config: Config, mailer: Mailer, limits: RateLimits): Router {
   const router = Router();
-  const cookie: CookieOptions = {
-    httpOnly: true,
-    secure: config.cookieSecure,
-    sameSite: 'strict',
-    path: '/api',
+  const cookie = (req: Request): CookieOptions => ({ httpOnly: true, secure: secureCookies(config, req), sameSite: 'strict', path: '/api' });
+  const tokenOf = (req: Request): string | undefined => {
+    const header = req.get('authorization');
+    if (header?.startsWith('Bearer ')) return header.slice(7).trim();
+    return (req.cookies as Record<string, string> | undefined)?.[SESSION_COOKIE];
   };
 
-  router.post('/auth/sign-in', signInLimiter(config), async (req, res) => {
+  router.post('/auth/sign-in', limitByAddress(limits, 'sign-in attempts from your address'), async (req, res) => {
     const body = signInBodySchema.parse(req.body);
-    const user = await signIn(body);
-    const token = signSessionToken(config, { sub: user.id, ver: user.tokenVersion });
-    res.cookie(SESSION_COOKIE, token, { ...cookie, maxAge: ttlMs(config.jwt.ttl) });
-    const actor = await loadActor(user.id, user.tokenVersion);
+    const account = body.email;
+    await refuseWhenSpent(limits.failedByAccount, account, 'failed sign-ins on this account', res);
+    let user;
+    try {
+      user = await signIn(body);
+    } catch (err) {
+      if (err instanceof HttpError && err.code === 'BAD_CREDENTIALS') {
+        await consumeOrRefuse(limits.failedByAccount, account, 'failed sign-ins on this account', res);
+      }
+      throw err;
+    }
+    await limits.failedByAccount.delete(account);
+    const ttl = ttlMs(config.jwt.ttl);
+    await pruneSessions(user.id);
+    const session = await startSession(user.id, ttl);
+    const token = signSessionToken(config, { sub: user.id, ver: user.tokenVersion, sid: session.id });
+    res.cookie(SESSION_COOKIE, token, { ...cookie(req), maxAge: ttl });
+    const actor = await loadActor(user.id, user.tokenVersion, session.id);
     res.json({ user: await describeMe(actor!) });
   });
 
-  // Signing out clears this browser's cookie; it needs no valid session.
-  router.post('/auth/sign-out', (_req, res) => {
-    res.clearCookie(SESSION_COOKIE, cookie);
+  // Signing out ends this session on the server (a copy of the token stops working) and clears
+  // this browser's cookie; it needs no valid session.
+  router.post('/auth/sign-out', async (req, res) => {
+    const claims = readSessionToken(config, tokenOf(req));
+    if (claims) await endSession(claims.sid);
+    res.clearCookie(SESSION_COOKIE, cookie(req));
     // Analysis answers may be kept by the browser for revalidation (private, no-cache): dropped
     // here, so the next person on this device finds none of them (W3C Clear Site Data).
     res.set('Clear-Site-Data', '"cache"');
     res.status(204).end();
   });
 
-  // The same answer whether or not the account exists; rate-limited like sign-in.
-  router.post('/auth/forgot', signInLimiter(config), async (req, res) => {
+  // The same answer whether or not the account exists; limited per address and per account.
+  router.post('/auth/forgot', limitByAddress(limits, 'requests from your address'), async (req, res) => {
     const { email } = forgotBodySchema.parse(req.body);
-    // The link goes to the configured address; without one, to the address this request came to.
-    const appUrl = config.appUrl ?? `${req.protocol}://${req.get('host')}`;
-    await requestPasswordReset(email, appUrl, mailer);
+    await consumeOrRefuse(limits.resetsByAccount, email, 'reset e-mails for this account', res);
+    // The link goes to the configured address only, never to the Host the request names.
+    await requestPasswordReset(email, config.appUrl, mailer);
     res.status(204).end();
   });
 
-  router.post('/auth/reset', signInLimiter(config), async (req, res) => {
+  router.post('/auth/reset', limitByAddress(limits, 'requests from your address'), async (req, res) => {
     const { token, password } = resetBodySchema.parse(req.body);
     await resetPassword(token, password);
     res.status(204).end();
   });
 
-  router.post('/auth/sign-out-everywhere', authenticate(config), async (_req, res) => {
+  router.post('/auth/sign-out-everywhere', authenticate(config), async (req, res) => {
     await signOutEverywhere(actorOf(res));
-    res.clearCookie(SESSION_COOKIE, cookie);
+    res.clearCookie(SESSION_COOKIE, cookie(req));
     // Analysis answers may be kept by the browser for revalidation (private, no-cache): dropped
     // here, so the next person on this device finds none of them (W3C Clear Site Data).
     res.set('Clear-Site-Data', '"cache"');

@@ -5,9 +5,10 @@ import { actorOf } from '../middleware/authenticate';
 import { jsonField, singleFileUpload } from '../middleware/upload';
 import { idParamsSchema, importOptionsSchema, remapBodySchema } from '../schemas';
 import { commitBayFile, deleteBayFile, getBayFile, getBayFileText, listBayFiles, previewBayFile, remapBayFile, type CommitHooks } from '../services/bay-files';
+import type { ImportPool } from '../services/import-pool';
 
 /** /api/fittings/:id/bay-files… and /api/bay-files/:id… */
-export function bayFilesRouter(sequelize: Sequelize, config: Config, hooks: CommitHooks = {}): Router {
+export function bayFilesRouter(sequelize: Sequelize, config: Config, pool: ImportPool, hooks: CommitHooks = {}): Router {
   const router = Router();
   const upload = singleFileUpload(config);
   const limits = { maxRows: config.upload.maxRows };
@@ -21,13 +22,13 @@ export function bayFilesRouter(sequelize: Sequelize, config: Config, hooks: Comm
   router.post('/fittings/:id/bay-files/preview', upload, async (req, res) => {
     const { id } = idParamsSchema.parse(req.params);
     const options = importOptionsSchema.parse(jsonField(req, 'options'));
-    res.json(await previewBayFile(actorOf(res), id, fileOf(req), options, limits));
+    res.json(await previewBayFile(pool, actorOf(res), id, fileOf(req), options, limits));
   });
 
   router.post('/fittings/:id/bay-files', upload, async (req, res) => {
     const { id } = idParamsSchema.parse(req.params);
     const options = importOptionsSchema.parse(jsonField(req, 'options'));
-    res.status(201).json(await commitBayFile(sequelize, actorOf(res), id, fileOf(req), options, limits, hooks));
+    res.status(201).json(await commitBayFile(sequelize, pool, actorOf(res), id, fileOf(req), options, limits, hooks));
   });
 
   router.get('/bay-files/:id', async (req, res) => {
@@ -37,14 +38,15 @@ export function bayFilesRouter(sequelize: Sequelize, config: Config, hooks: Comm
 
   router.get('/bay-files/:id/raw', async (req, res) => {
     const { id } = idParamsSchema.parse(req.params);
-    const { fileName, text } = await getBayFileText(actorOf(res), id);
-    res.type('text/csv').attachment(fileName).send(text);
+    const { fileName, text } = await getBayFileText(pool, actorOf(res), id);
+    // a download, never shown in the page; nosniff keeps a browser from reading it as anything else
+    res.set('X-Content-Type-Options', 'nosniff').type('text/csv; charset=utf-8').attachment(fileName).send(text);
   });
 
   router.put('/bay-files/:id/recipe', async (req, res) => {
     const { id } = idParamsSchema.parse(req.params);
     const body = remapBodySchema.parse(req.body);
-    res.json(await remapBayFile(sequelize, actorOf(res), id, body.recipe, body.builds, limits));
+    res.json(await remapBayFile(sequelize, pool, actorOf(res), id, body.recipe, body.builds, limits));
   });
 
   router.delete('/bay-files/:id', async (req, res) => {

@@ -2,6 +2,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import type { Sequelize } from 'sequelize';
 import { Build, Fitting, Player, Shop, User } from '../models';
+import { createImportPool } from '../services/import-pool';
 import { commitBayFile } from '../services/bay-files';
 import { hashPassword } from '../services/passwords';
 import { seedDemoBags, type DemoBag, type DemoChoice } from './demo-bags';
@@ -92,14 +93,19 @@ export async function seedDemo(sequelize: Sequelize, now: Date, after?: DemoHook
     }
   });
   // The demo sessions go in through the real import path, as a fitter would upload them.
-  for (const [i, f] of scenario.fittings.entries()) {
-    if (!f.bayFile) continue;
-    const fitting = fittings.get(String(i))!;
-    const fitter = await User.findOne({ where: { email: f.fitter } });
-    const actor = { id: fitter!.id, role: fitter!.role, shopId: fitter!.shopId, playerId: null, units: fitter!.units };
-    const file = { name: f.bayFile, buffer: fs.readFileSync(path.join(DEMO_DIR, f.bayFile)) };
-    await commitBayFile(sequelize, actor, fitting.id, file, { builds: { mode: 'column' } }, { maxRows: 200_000 });
-    for (const b of f.builds ?? []) await Build.update(b.spec, { where: { fittingId: fitting.id, club: b.club, label: b.label } });
+  const pool = createImportPool(1);
+  try {
+    for (const [i, f] of scenario.fittings.entries()) {
+      if (!f.bayFile) continue;
+      const fitting = fittings.get(String(i))!;
+      const fitter = await User.findOne({ where: { email: f.fitter } });
+      const actor = { id: fitter!.id, role: fitter!.role, shopId: fitter!.shopId, playerId: null, units: fitter!.units };
+      const file = { name: f.bayFile, buffer: fs.readFileSync(path.join(DEMO_DIR, f.bayFile)) };
+      await commitBayFile(sequelize, pool, actor, fitting.id, file, { builds: { mode: 'column' } }, { maxRows: 200_000 });
+      for (const b of f.builds ?? []) await Build.update(b.spec, { where: { fittingId: fitting.id, club: b.club, label: b.label } });
+    }
+  } finally {
+    await pool.close();
   }
   const choices = [];
   for (const [i, f] of scenario.fittings.entries()) {

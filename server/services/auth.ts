@@ -3,6 +3,7 @@ import { Player, Shop, User } from '../models';
 import type { Me, SignInBody, UnitsPreference } from '../schemas';
 import type { Actor } from './actor';
 import { verifyAgainstDummy, verifyPassword } from './passwords';
+import { endAllSessions, isSessionOpen } from './sessions';
 
 const badCredentials = () =>
   new HttpError(401, 'BAD_CREDENTIALS', 'That e-mail and password do not match an account.');
@@ -19,10 +20,11 @@ export async function signIn(body: SignInBody): Promise<User> {
   return user;
 }
 
-/** Loads the actor of a verified token; null when the user is gone, inactive or signed out. */
-export async function loadActor(userId: string, tokenVersion: number): Promise<Actor | null> {
+/** Loads the actor of a verified token; null when the user is gone, inactive or signed out (everywhere or in this session). */
+export async function loadActor(userId: string, tokenVersion: number, sessionId: string): Promise<Actor | null> {
   const user = await User.findByPk(userId);
   if (!user || !user.active || user.tokenVersion !== tokenVersion) return null;
+  if (!(await isSessionOpen(sessionId, userId))) return null;
   let playerId: string | null = null;
   if (user.role === 'player') {
     const player = await Player.findOne({ where: { userId: user.id }, attributes: ['id'] });
@@ -54,5 +56,6 @@ export async function updateUnits(actor: Actor, units: UnitsPreference): Promise
 export async function signOutEverywhere(actor: Actor): Promise<void> {
   const user = await User.findByPk(actor.id);
   if (user) await user.increment('tokenVersion');
+  await endAllSessions(actor.id);
 }
 

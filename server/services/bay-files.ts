@@ -1,31 +1,31 @@
 /**
  * Bay files: preview (mapping suggestion and converted rows, nothing stored), commit (raw text,
- * recipe, report and shots in one transaction), re-map, delete; saved recipes; builds.
+ * recipe, report and shots in one transaction), re-map, delete; saved recipes; builds. Parsing,
+ * mapping and validating run in the import worker pool (import-pool.ts), off the event loop.
  */
-import { createHash } from 'node:crypto';
-import type { Sequelize, Transaction } from 'sequelize';
-import type { Shot, ShotValues } from '../../analysis/fields';
-import { fillFlightFields, type Conditions } from '../../analysis/flight';
-import { ImportError, importBayFile, recipeSchema, type ImportResult, type Recipe } from '../../analysis/import';
+import { UniqueConstraintError, type Sequelize, type Transaction } from 'sequelize';
+import type { Conditions } from '../../analysis/flight';
+import { recipeSchema, type Recipe } from '../../analysis/import';
 import { HttpError, notFound } from '../errors';
 import { BayFile, Build, Fitting, Recipe as RecipeModel } from '../models';
 import { specOf } from '../models/spec-attributes';
-import type { BayFile as BayFileDto, BuildAssignment, ImportReport, SavedRecipe, buildSpecBodySchema, importOptionsSchema } from '../schemas';
+import type { BayFile as BayFileDto, ImportReport, SavedRecipe, buildSpecBodySchema, importOptionsSchema } from '../schemas';
 import type { z } from 'zod';
 import { type Actor, isStaff, requireOwner, requireStaff } from './actor';
+import type { BayFileLimits, ImportTaskResult } from './bay-file-import';
 import { findVisibleFitting } from './fittings';
 import { bumpFittingRevision } from './fitting-revision';
+import type { ImportPool } from './import-pool';
+import { renameNotFound } from './not-found';
+import { withDeadlockRetry } from './retry';
 import { decisionsOf, insertShots } from './shot-store';
 
+export type { BayFileLimits } from './bay-file-import';
 export type ParsedImportOptions = z.output<typeof importOptionsSchema>;
 
 export interface UploadedFile {
   name: string;
   buffer: Buffer;
-}
-
-export interface BayFileLimits {
-  maxRows: number;
 }
 
 /** A fitting the actor may add bay files to: staff of its shop, or its player when it is remote. */
@@ -35,30 +35,6 @@ export async function findWritableFitting(actor: Actor, fittingId: string): Prom
     throw new HttpError(403, 'FORBIDDEN', 'Only a remote fitting takes files from its player. Ask your fitter to make it remote.');
   }
   return fitting;
-}
-
-/**
- * Decodes an upload as text: UTF-16 with a byte-order mark, UTF-8 (BOM dropped), or
- * Windows-1252 when it is not valid UTF-8. Any other file with NUL bytes is not text.
- */
-export function decodeUpload(buffer: Buffer): string {
-  // Some spreadsheet programs save "Unicode text" as UTF-16 with a byte-order mark.
-  if (buffer.length >= 2 && buffer[0] === 0xff && buffer[1] === 0xfe) return new TextDecoder('utf-16le').decode(buffer.subarray(2));
-  if (buffer.length >= 2 && buffer[0] === 0xfe && buffer[1] === 0xff) return new TextDecoder('utf-16be').decode(buffer.subarray(2));
-  if (buffer.includes(0)) throw new HttpError(400, 'NOT_TEXT', 'This file is not a text (CSV) file. Export the session as CSV and try again.');
-  let text: string;
-  try {
-    text = new TextDecoder('utf-8', { fatal: true }).decode(buffer);
-  } catch {
-    text = new TextDecoder('windows-1252').decode(buffer);
-  }
-  return text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
-}
-
-function countLines(text: string): number {
-  let n = 1;
-  for (let i = text.indexOf('\n'); i !== -1; i = text.indexOf('\n', i + 1)) n += 1;
-  return n;
 }
 
 /**
@@ -83,12 +59,6 @@ async function recipeOf(actor: Actor, options: ParsedImportOptions): Promise<Rec
   return overlayRecipe(base, options.recipe);
 }
 
-function buildOptions(builds: BuildAssignment): { defaultBuild: string | null; buildByClub?: Record<string, string>; forceBuild?: string } {
-  if (builds.mode === 'file') return { defaultBuild: null, forceBuild: builds.build };
-  if (builds.mode === 'club') return { defaultBuild: null, buildByClub: builds.byClub };
-  return { defaultBuild: builds.fallback ?? null };
-}
-
 /** The air and ground of a fitting, for the ball-flight model (unset values: the standard atmosphere, normal ground). */
 export function airOf(fitting: Pick<Fitting, 'temperatureC' | 'altitudeM' | 'humidityPct' | 'groundFirmness'>): Conditions {
   return {
@@ -99,73 +69,28 @@ export function airOf(fitting: Pick<Fitting, 'temperatureC' | 'altitudeM' | 'hum
   };
 }
 
-/**
- * Runs the import library, mapping its errors to 400s a fitter can read. Shots with launch
- * conditions but no carry, total, offline, apex, descent or flight time get them from the
- * ball-flight model in the fitting's air and on its ground, marked as derived.
- */
-export function runImport(text: string, recipe: Recipe | undefined, builds: BuildAssignment, limits: BayFileLimits, air: Conditions = {}): ImportResult {
-  if (countLines(text) > limits.maxRows + 50) {
-    throw new HttpError(400, 'TOO_MANY_ROWS', `This file has more than ${limits.maxRows.toLocaleString('en')} rows, the most one import takes. Split it and import the parts.`);
-  }
-  const b = buildOptions(builds);
-  try {
-    const fillFlight = (values: ShotValues) => fillFlightFields(values, air);
-    const result = importBayFile(text, { recipe, defaultBuild: b.defaultBuild, buildByClub: b.buildByClub, fillFlight });
-    if (b.forceBuild) for (const s of result.shots) s.build = b.forceBuild;
-    if (result.rows > limits.maxRows) {
-      throw new HttpError(400, 'TOO_MANY_ROWS', `This file has ${result.rows.toLocaleString('en')} rows; one import takes at most ${limits.maxRows.toLocaleString('en')}.`);
-    }
-    return result;
-  } catch (err) {
-    if (err instanceof ImportError) throw new HttpError(400, err.code, err.message);
-    throw err;
-  }
-}
-
-function groupsOf(shots: readonly Shot[]): ImportReport['groups'] {
-  const counts = new Map<string, { club: string; build: string | null; n: number }>();
-  for (const s of shots) {
-    const key = `${s.club}\u0000${s.build ?? ''}`;
-    const g = counts.get(key) ?? { club: s.club, build: s.build, n: 0 };
-    g.n += 1;
-    counts.set(key, g);
-  }
-  return [...counts.values()];
-}
-
-function reportOf(result: ImportResult): ImportReport {
-  return {
-    rows: result.rows,
-    imported: result.shots.length,
-    rejected: result.rejected.slice(0, 1000),
-    skipped: result.skipped.slice(0, 1000),
-    warnings: result.warnings,
-    unknownClubs: result.unknownClubs,
-    groups: groupsOf(result.shots),
-  };
-}
-
-export const contentHash = (text: string) => createHash('sha256').update(text).digest('hex');
+const recipeNameTaken = () => new HttpError(409, 'RECIPE_NAME_TAKEN', 'Your shop already has a recipe with that name.');
+const duplicateFile = () => new HttpError(409, 'DUPLICATE_FILE', 'This exact file is already imported into this fitting.');
 
 /** What an import would do: the mapping, warnings, the first converted rows, the rejected rows. Stores nothing. */
-export async function previewBayFile(actor: Actor, fittingId: string, file: UploadedFile, options: ParsedImportOptions, limits: BayFileLimits) {
+export async function previewBayFile(pool: ImportPool, actor: Actor, fittingId: string, file: UploadedFile, options: ParsedImportOptions, limits: BayFileLimits) {
   const fitting = await findWritableFitting(actor, fittingId);
-  const text = decodeUpload(file.buffer);
-  const result = runImport(text, await recipeOf(actor, options), options.builds, limits, airOf(fitting));
-  const hash = contentHash(text);
-  const duplicate = await BayFile.findOne({ where: { fittingId, contentHash: hash }, attributes: ['id', 'fileName'] });
+  const result = await pool.run({ bytes: file.buffer, recipe: await recipeOf(actor, options), builds: options.builds, limits, air: airOf(fitting), store: false });
+  const duplicate = await BayFile.findOne({ where: { fittingId, contentHash: result.contentHash }, attributes: ['id', 'fileName'] });
+  // the rule commit applies: a taken recipe name is refused, so the preview says so first
+  const nameTaken = options.saveRecipeAs && isStaff(actor) ? !!(await RecipeModel.findOne({ where: { shopId: actor.shopId, name: options.saveRecipeAs }, attributes: ['id'] })) : false;
   return {
     fileName: file.name,
-    contentHash: hash,
+    contentHash: result.contentHash,
     duplicateOf: duplicate ? { id: duplicate.id, fileName: duplicate.fileName } : null,
+    recipeNameTaken: nameTaken,
     sniff: result.sniff,
     recipe: result.recipe,
     suggestions: result.suggestions,
     /** Guesses the fitter should confirm (a sign convention assumed, a unit inferred…). */
     ambiguous: result.ambiguous,
-    report: reportOf(result),
-    shots: result.shots.slice(0, 25),
+    report: result.report,
+    shots: result.firstShots,
   };
 }
 
@@ -188,17 +113,20 @@ function toDto(b: BayFile): BayFileDto {
 /**
  * Creates a build record for every (club, label) the shots name that the fitting lacks; shots
  * with no build name get one with the empty label, so every group can carry its specs (loft…).
+ * Names compare exactly, in this map and in the database (migration 0006); a build another
+ * import is creating at the same moment is left to it (INSERT IGNORE).
  */
-async function ensureBuilds(fittingId: string, shots: readonly Shot[], transaction: Transaction): Promise<void> {
+async function ensureBuilds(fittingId: string, groups: ImportReport['groups'], transaction: Transaction): Promise<void> {
   const wanted = new Map<string, { club: string; label: string }>();
-  for (const s of shots) {
-    const label = (s.build ?? '').slice(0, 80);
-    wanted.set(`${s.club}\u0000${label}`, { club: s.club.slice(0, 40), label });
+  for (const g of groups) {
+    const label = g.build ?? '';
+    wanted.set(`${g.club}\u0000${label}`, { club: g.club, label });
   }
   if (wanted.size === 0) return;
   const existing = await Build.findAll({ where: { fittingId }, attributes: ['club', 'label'], transaction });
   for (const e of existing) wanted.delete(`${e.club}\u0000${e.label}`);
-  if (wanted.size) await Build.bulkCreate([...wanted.values()].map((w) => ({ fittingId, ...w })), { transaction });
+  const rows = [...wanted.values()].sort((a, b) => (a.club + a.label < b.club + b.label ? -1 : 1)); // one lock order for every import
+  if (rows.length) await Build.bulkCreate(rows.map((w) => ({ fittingId, ...w })), { transaction, ignoreDuplicates: true });
 }
 
 export interface CommitHooks {
@@ -206,9 +134,15 @@ export interface CommitHooks {
   afterChunk?: (chunkIndex: number) => void | Promise<void>;
 }
 
-/** Stores a bay file, its recipe, its report and its shots: all or nothing. */
+/**
+ * Stores a bay file, its recipe, its report and its shots: all or nothing. A deadlock with
+ * another import into the same fitting is retried; the same file sent twice at once stores
+ * once (the other answers 409 DUPLICATE_FILE); a taken recipe name answers 409
+ * RECIPE_NAME_TAKEN, as saving a recipe does, and stores nothing.
+ */
 export async function commitBayFile(
   sequelize: Sequelize,
+  pool: ImportPool,
   actor: Actor,
   fittingId: string,
   file: UploadedFile,
@@ -217,47 +151,57 @@ export async function commitBayFile(
   hooks: CommitHooks = {},
 ): Promise<BayFileDto> {
   const fitting = await findWritableFitting(actor, fittingId);
-  const text = decodeUpload(file.buffer);
-  const result = runImport(text, await recipeOf(actor, options), options.builds, limits, airOf(fitting));
-  if (result.shots.length === 0) {
+  const result: ImportTaskResult = await pool.run({ bytes: file.buffer, recipe: await recipeOf(actor, options), builds: options.builds, limits, air: airOf(fitting), store: true });
+  const table = result.table!;
+  if (table.count === 0) {
     throw new HttpError(400, 'NO_SHOTS', 'No row of this file could be imported; nothing was stored. See the rejected rows in the preview.');
   }
-  const hash = contentHash(text);
-  if (await BayFile.findOne({ where: { fittingId, contentHash: hash }, attributes: ['id'] })) {
-    throw new HttpError(409, 'DUPLICATE_FILE', 'This exact file is already imported into this fitting.');
-  }
-  const bayFile = await sequelize.transaction(async (transaction) => {
-    const created = await BayFile.create(
-      {
-        fittingId,
-        uploadedBy: actor.id,
-        fileName: file.name.slice(0, 255) || 'bay-file.csv',
-        contentHash: hash,
-        rawText: text,
-        recipe: JSON.stringify(result.recipe),
-        report: JSON.stringify(reportOf(result)),
-        rowCount: result.rows,
-        shotCount: result.shots.length,
-      },
-      { transaction },
-    );
-    await insertShots(transaction, created.id, fittingId, result.shots, new Map(), hooks.afterChunk);
-    await ensureBuilds(fittingId, result.shots, transaction);
-    await bumpFittingRevision(fittingId, transaction);
-    if (options.saveRecipeAs && isStaff(actor)) {
-      await RecipeModel.upsert({ shopId: actor.shopId, name: options.saveRecipeAs, recipe: JSON.stringify(result.recipe), createdBy: actor.id }, { transaction });
-    }
-    return created;
-  });
+  if (await BayFile.findOne({ where: { fittingId, contentHash: result.contentHash }, attributes: ['id'] })) throw duplicateFile();
+  const saveAs = options.saveRecipeAs && isStaff(actor) ? options.saveRecipeAs : null;
+  if (saveAs && (await RecipeModel.findOne({ where: { shopId: actor.shopId, name: saveAs }, attributes: ['id'] }))) throw recipeNameTaken();
+  const bayFile = await withDeadlockRetry(() =>
+    sequelize.transaction(async (transaction) => {
+      let created: BayFile;
+      try {
+        created = await BayFile.create(
+          {
+            fittingId,
+            uploadedBy: actor.id,
+            fileName: file.name.slice(0, 255) || 'bay-file.csv',
+            contentHash: result.contentHash,
+            rawText: result.text,
+            recipe: JSON.stringify(result.recipe),
+            report: JSON.stringify(result.report),
+            rowCount: result.report.rows,
+            shotCount: table.count,
+          },
+          { transaction },
+        );
+      } catch (err) {
+        if (err instanceof UniqueConstraintError) throw duplicateFile(); // the same file, committed a moment ago
+        throw err;
+      }
+      await ensureBuilds(fittingId, result.report.groups, transaction);
+      await insertShots(transaction, created.id, fittingId, table, new Map(), hooks.afterChunk);
+      await bumpFittingRevision(fittingId, transaction);
+      if (saveAs) {
+        try {
+          await RecipeModel.create({ shopId: actor.shopId, name: saveAs, recipe: JSON.stringify(result.recipe), createdBy: actor.id }, { transaction });
+        } catch (err) {
+          if (err instanceof UniqueConstraintError) throw recipeNameTaken();
+          throw err;
+        }
+      }
+      return created;
+    }),
+  );
   return toDto(bayFile);
 }
 
 async function findVisibleBayFile(actor: Actor, id: string): Promise<BayFile> {
   const bayFile = await BayFile.findByPk(id);
   if (!bayFile) throw notFound('That bay file');
-  await findVisibleFitting(actor, bayFile.fittingId).catch(() => {
-    throw notFound('That bay file');
-  });
+  await renameNotFound(findVisibleFitting(actor, bayFile.fittingId), 'That bay file');
   return bayFile;
 }
 
@@ -271,29 +215,42 @@ export async function getBayFile(actor: Actor, id: string): Promise<BayFileDto> 
   return toDto(await findVisibleBayFile(actor, id));
 }
 
-/** The raw text as uploaded. */
-export async function getBayFileText(actor: Actor, id: string): Promise<{ fileName: string; text: string }> {
+/**
+ * The file as uploaded, for download: its rows and cells as they were, except that a cell a
+ * spreadsheet would run as a formula is neutralised (OWASP, "CSV Injection").
+ */
+export async function getBayFileText(pool: ImportPool, actor: Actor, id: string): Promise<{ fileName: string; text: string }> {
   const b = await findVisibleBayFile(actor, id);
-  return { fileName: b.fileName, text: b.rawText };
+  const delimiter = (JSON.parse(b.recipe) as Recipe).delimiter ?? ',';
+  return { fileName: b.fileName, text: await pool.neutralise(b.rawText, delimiter) };
 }
 
-/** Applies a new recipe to a stored file: its shots are replaced in one transaction; decisions by row stay. */
-export async function remapBayFile(sequelize: Sequelize, actor: Actor, id: string, recipe: Recipe, builds: BuildAssignment, limits: BayFileLimits): Promise<BayFileDto> {
+/**
+ * Applies a new recipe to a stored file: its shots are replaced in one transaction; decisions by
+ * row stay. Staff may re-map any file of their shop; a player only a file they uploaded.
+ */
+export async function remapBayFile(sequelize: Sequelize, pool: ImportPool, actor: Actor, id: string, recipe: Recipe, builds: ParsedImportOptions['builds'], limits: BayFileLimits): Promise<BayFileDto> {
   const bayFile = await findVisibleBayFile(actor, id);
   const fitting = await findWritableFitting(actor, bayFile.fittingId);
-  const result = runImport(bayFile.rawText, recipe, builds, limits, airOf(fitting));
-  if (result.shots.length === 0) throw new HttpError(400, 'NO_SHOTS', 'With this recipe no row could be imported; the file was left as it was.');
-  await sequelize.transaction(async (transaction) => {
-    const decisions = await decisionsOf(sequelize, bayFile.id, transaction);
-    await sequelize.query('DELETE FROM shots WHERE bay_file_id = ?', { replacements: [bayFile.id], transaction });
-    await insertShots(transaction, bayFile.id, bayFile.fittingId, result.shots, decisions);
-    await ensureBuilds(bayFile.fittingId, result.shots, transaction);
-    await bumpFittingRevision(bayFile.fittingId, transaction);
-    await bayFile.update(
-      { recipe: JSON.stringify(result.recipe), report: JSON.stringify(reportOf(result)), rowCount: result.rows, shotCount: result.shots.length },
-      { transaction },
-    );
-  });
+  if (!isStaff(actor) && bayFile.uploadedBy !== actor.id) {
+    throw new HttpError(403, 'FORBIDDEN', 'Only the fitter, or whoever uploaded this file, may change its mapping.');
+  }
+  const result = await pool.run({ text: bayFile.rawText, recipe, builds, limits, air: airOf(fitting), store: true });
+  const table = result.table!;
+  if (table.count === 0) throw new HttpError(400, 'NO_SHOTS', 'With this recipe no row could be imported; the file was left as it was.');
+  await withDeadlockRetry(() =>
+    sequelize.transaction(async (transaction) => {
+      const decisions = await decisionsOf(sequelize, bayFile.id, transaction);
+      await sequelize.query('DELETE FROM shots WHERE bay_file_id = ?', { replacements: [bayFile.id], transaction });
+      await ensureBuilds(bayFile.fittingId, result.report.groups, transaction);
+      await insertShots(transaction, bayFile.id, bayFile.fittingId, table, decisions);
+      await bumpFittingRevision(bayFile.fittingId, transaction);
+      await bayFile.update(
+        { recipe: JSON.stringify(result.recipe), report: JSON.stringify(result.report), rowCount: result.report.rows, shotCount: table.count },
+        { transaction },
+      );
+    }),
+  );
   return getBayFile(actor, id);
 }
 
@@ -317,10 +274,13 @@ export async function listRecipes(actor: Actor): Promise<SavedRecipe[]> {
 
 export async function saveRecipe(actor: Actor, name: string, recipe: Recipe): Promise<SavedRecipe> {
   requireStaff(actor);
-  if (await RecipeModel.findOne({ where: { shopId: actor.shopId, name } })) {
-    throw new HttpError(409, 'RECIPE_NAME_TAKEN', 'Your shop already has a recipe with that name.');
+  if (await RecipeModel.findOne({ where: { shopId: actor.shopId, name } })) throw recipeNameTaken();
+  try {
+    return toSaved(await RecipeModel.create({ shopId: actor.shopId, name, recipe: JSON.stringify(recipe), createdBy: actor.id }));
+  } catch (err) {
+    if (err instanceof UniqueConstraintError) throw recipeNameTaken(); // saved by someone else a moment ago
+    throw err;
   }
-  return toSaved(await RecipeModel.create({ shopId: actor.shopId, name, recipe: JSON.stringify(recipe), createdBy: actor.id }));
 }
 
 /** One saved recipe of the actor's shop (staff), or 404. */
@@ -337,11 +297,14 @@ export async function renameRecipe(actor: Actor, id: string, name: string): Prom
   const recipe = await RecipeModel.findOne({ where: { id, shopId: actor.shopId } });
   if (!recipe) throw notFound('That recipe');
   if (recipe.name === name) return toSaved(recipe);
-  if (await RecipeModel.findOne({ where: { shopId: actor.shopId, name } })) {
-    throw new HttpError(409, 'RECIPE_NAME_TAKEN', 'Your shop already has a recipe with that name.');
-  }
+  if (await RecipeModel.findOne({ where: { shopId: actor.shopId, name } })) throw recipeNameTaken();
   recipe.name = name;
-  await recipe.save();
+  try {
+    await recipe.save();
+  } catch (err) {
+    if (err instanceof UniqueConstraintError) throw recipeNameTaken(); // taken by someone else a moment ago
+    throw err;
+  }
   return toSaved(recipe);
 }
 
@@ -364,9 +327,7 @@ export async function listBuilds(actor: Actor, fittingId: string) {
 async function findVisibleBuild(actor: Actor, id: string): Promise<Build> {
   const build = await Build.findByPk(id);
   if (!build) throw notFound('That build');
-  await findVisibleFitting(actor, build.fittingId).catch(() => {
-    throw notFound('That build');
-  });
+  await renameNotFound(findVisibleFitting(actor, build.fittingId), 'That build');
   return build;
 }
 

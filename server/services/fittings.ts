@@ -5,6 +5,7 @@ import { Fitting as FittingModel, Player, User } from '../models';
 import type { Fitting, FittingListQuery, fittingBodySchema, fittingUpdateSchema } from '../schemas';
 import { type Actor, isStaff, requireStaff } from './actor';
 import { bumpFittingRevision } from './fitting-revision';
+import { notFoundAs } from './not-found';
 import { findVisiblePlayer } from './players';
 import { countShotsByFitting } from './shot-store';
 
@@ -90,9 +91,7 @@ async function checkFitter(actor: Actor, fitterId: string): Promise<void> {
 
 export async function createFitting(actor: Actor, body: z.output<typeof fittingBodySchema>): Promise<Fitting> {
   requireStaff(actor);
-  await findVisiblePlayer(actor, body.playerId).catch(() => {
-    throw new HttpError(400, 'VALIDATION_FAILED', 'Choose a player of your shop.', [{ path: ['playerId'], message: 'Unknown player' }]);
-  });
+  await notFoundAs(findVisiblePlayer(actor, body.playerId), () => new HttpError(400, 'VALIDATION_FAILED', 'Choose a player of your shop.', [{ path: ['playerId'], message: 'Unknown player' }]));
   const fitterId = body.fitterId ?? actor.id;
   await checkFitter(actor, fitterId);
   const fitting = await FittingModel.create({

@@ -7,7 +7,9 @@ import { Op } from 'sequelize';
 import { HttpError } from '../errors';
 import { PasswordReset, User } from '../models';
 import type { Mailer } from './mailer';
+import { assertStrongPassword } from './password-strength';
 import { hashPassword } from './passwords';
+import { endAllSessions } from './sessions';
 
 export const RESET_LINK_TTL_MS = 60 * 60 * 1000;
 
@@ -18,7 +20,8 @@ export async function requestPasswordReset(email: string, appUrl: string, mailer
   const user = await User.findOne({ where: { email, active: true } });
   if (!user) return;
   const token = randomBytes(32).toString('base64url');
-  await PasswordReset.create({ userId: user.id, tokenHash: sha256(token), expiresAt: new Date(now.getTime() + RESET_LINK_TTL_MS), usedAt: null });
+  // created and expiring by one clock reading, so the link lasts exactly RESET_LINK_TTL_MS
+  await PasswordReset.create({ userId: user.id, tokenHash: sha256(token), expiresAt: new Date(now.getTime() + RESET_LINK_TTL_MS), usedAt: null, createdAt: now });
   const link = `${appUrl.replace(/\/$/, '')}/reset?token=${token}`;
   await mailer.send({
     to: user.email,
@@ -41,10 +44,12 @@ export async function resetPassword(token: string, password: string, now = new D
   if (!reset || !user || !user.active) {
     throw new HttpError(400, 'RESET_LINK_INVALID', 'This link has expired or was already used. Ask for a new one.');
   }
+  assertStrongPassword(password, [user.email, user.name]);
   const passwordHash = await hashPassword(password);
   await User.sequelize!.transaction(async (transaction) => {
     const [used] = await PasswordReset.update({ usedAt: now }, { where: { id: reset.id, usedAt: null }, transaction });
     if (used !== 1) throw new HttpError(400, 'RESET_LINK_INVALID', 'This link has expired or was already used. Ask for a new one.');
     await user.update({ passwordHash, tokenVersion: user.tokenVersion + 1 }, { transaction });
+    await endAllSessions(user.id, now, transaction);
   });
 }

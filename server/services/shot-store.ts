@@ -6,13 +6,16 @@
  */
 import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import { SHOT_FIELDS, type Shot, type ShotField } from '../../analysis/fields';
+import { packShots, type ShotTable } from './bay-file-import';
+import { derivedMask } from './shot-mask';
+
+export { derivedMask } from './shot-mask';
 
 const snake = (s: string) => s.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`);
 export const FIELD_COLUMNS: readonly string[] = SHOT_FIELDS.map(snake);
 const COLUMNS = ['bay_file_id', 'fitting_id', 'row_number', 'club', 'build', ...FIELD_COLUMNS, 'derived_mask', 'decision'];
 // Column names are quoted: row_number is a reserved word in MariaDB.
 const INSERT_SQL = `INSERT INTO shots (${COLUMNS.map((c) => `\`${c}\``).join(', ')}) VALUES (${COLUMNS.map(() => '?').join(', ')})`;
-const FIELD_BIT = new Map<ShotField, number>(SHOT_FIELDS.map((f, i) => [f, 1 << i]));
 export const STORE_CHUNK = 5000;
 
 interface DriverConnection {
@@ -25,12 +28,6 @@ export interface StoredShot extends Shot {
   decision: 'keep' | 'drop' | null;
 }
 
-export function derivedMask(derived: readonly ShotField[]): number {
-  let mask = 0;
-  for (const f of derived) mask |= FIELD_BIT.get(f) ?? 0;
-  return mask;
-}
-
 function connectionOf(transaction: Transaction): DriverConnection {
   const conn = (transaction as unknown as { connection?: DriverConnection }).connection;
   if (!conn || typeof conn.batch !== 'function') throw new Error('shot store needs a mariadb transaction');
@@ -38,7 +35,10 @@ function connectionOf(transaction: Transaction): DriverConnection {
 }
 
 /**
- * Inserts the shots of one bay file inside a transaction, in chunks.
+ * Inserts the shots of one bay file inside a transaction, in chunks (the event loop runs between
+ * chunks). Club and build names are stored as the import gives them (already cut to their
+ * column lengths, analysis/import/import-limits.ts).
+ * @param shots the shots, or the same packed column-wise by the import worker
  * @param decisions kept fitter decisions by row number (a re-mapped file keeps them)
  * @param afterChunk called after each chunk (tests inject failures here)
  */
@@ -46,22 +46,24 @@ export async function insertShots(
   transaction: Transaction,
   bayFileId: string,
   fittingId: string,
-  shots: readonly Shot[],
+  shots: readonly Shot[] | ShotTable,
   decisions: ReadonlyMap<number, 'keep' | 'drop'> = new Map(),
   afterChunk?: (chunkIndex: number) => void | Promise<void>,
 ): Promise<void> {
   const conn = connectionOf(transaction);
-  for (let start = 0, chunk = 0; start < shots.length; start += STORE_CHUNK, chunk += 1) {
-    const end = Math.min(shots.length, start + STORE_CHUNK);
+  const table = 'count' in shots ? shots : packShots(shots);
+  const width = SHOT_FIELDS.length;
+  for (let start = 0, chunk = 0; start < table.count; start += STORE_CHUNK, chunk += 1) {
+    const end = Math.min(table.count, start + STORE_CHUNK);
     const rows: unknown[][] = new Array(end - start);
     for (let i = start; i < end; i += 1) {
-      const s = shots[i];
-      const row: unknown[] = [bayFileId, fittingId, s.row, s.club.slice(0, 40), s.build ? s.build.slice(0, 80) : null];
-      for (const f of SHOT_FIELDS) {
-        const v = s.values[f];
-        row.push(v === undefined || !Number.isFinite(v) ? null : v);
+      const buildId = table.buildIds[i];
+      const row: unknown[] = [bayFileId, fittingId, table.rows[i], table.clubs[table.clubIds[i]], buildId < 0 ? null : table.builds[buildId]];
+      for (let f = 0; f < width; f++) {
+        const v = table.values[i * width + f];
+        row.push(Number.isFinite(v) ? v : null);
       }
-      row.push(derivedMask(s.derived), decisions.get(s.row) ?? null);
+      row.push(table.derivedMasks[i], decisions.get(table.rows[i]) ?? null);
       rows[i - start] = row;
     }
     await conn.batch(INSERT_SQL, rows);

@@ -16,6 +16,7 @@ import { type Actor, requireStaff } from './actor';
 import { analyseFitting, sessionShots } from './analysis';
 import { findVisibleFitting } from './fittings';
 import { bumpFittingRevision } from './fitting-revision';
+import { renameNotFound } from './not-found';
 import { loadFittingShots, type StoredShot } from './shot-store';
 
 const KIND_ORDER: Record<StrayKind, number> = { misread: 0, mishit: 1, review: 2 };
@@ -102,9 +103,7 @@ export async function setShotDecision(sequelize: Sequelize, actor: Actor, shotId
     type: QueryTypes.SELECT,
   });
   if (!rows[0]) throw notFound('That shot');
-  await findVisibleFitting(actor, rows[0].fitting_id).catch(() => {
-    throw notFound('That shot');
-  });
+  await renameNotFound(findVisibleFitting(actor, rows[0].fitting_id), 'That shot');
   await sequelize.transaction(async (transaction) => {
     await sequelize.query('UPDATE shots SET decision = ? WHERE id = ?', { replacements: [decision, shotId], type: QueryTypes.UPDATE, transaction });
     await bumpFittingRevision(rows[0].fitting_id, transaction);

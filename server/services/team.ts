@@ -3,6 +3,7 @@ import { HttpError, notFound } from '../errors';
 import { User } from '../models';
 import type { TeamMember, playerAccountBodySchema, teamMemberBodySchema, teamMemberUpdateSchema } from '../schemas';
 import { type Actor, requireOwner, requireStaff } from './actor';
+import { assertStrongPassword } from './password-strength';
 import { hashPassword } from './passwords';
 import { findVisiblePlayer } from './players';
 
@@ -28,6 +29,7 @@ async function ensureEmailFree(email: string): Promise<void> {
 
 export async function addFitter(actor: Actor, body: z.output<typeof teamMemberBodySchema>): Promise<TeamMember> {
   requireOwner(actor);
+  assertStrongPassword(body.password, [body.email, body.name]);
   await ensureEmailFree(body.email);
   const user = await User.create({
     shopId: actor.shopId,
@@ -57,6 +59,7 @@ export async function createPlayerAccount(actor: Actor, playerId: string, body: 
   requireStaff(actor);
   const player = await findVisiblePlayer(actor, playerId);
   if (player.userId) throw new HttpError(409, 'HAS_ACCOUNT', 'This player already has a sign-in.');
+  assertStrongPassword(body.password, [body.email, player.name]);
   await ensureEmailFree(body.email);
   const user = await User.create({
     shopId: actor.shopId,

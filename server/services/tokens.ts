@@ -7,7 +7,10 @@ export const SESSION_COOKIE = 'ovy_session';
 
 export interface TokenClaims {
   sub: string;
+  /** The user's token version when signed (raised to end every session at once). */
   ver: number;
+  /** The server-side session (sessions table), ended at sign-out. */
+  sid: string;
 }
 
 /**
@@ -25,9 +28,9 @@ function secretKey(config: Config): KeyObject {
   return key;
 }
 
-/** Signs a session token: HS256, with expiry. */
+/** Signs a session token: HS256, with issue time and expiry. */
 export function signSessionToken(config: Config, claims: TokenClaims): string {
-  return jwt.sign({ ver: claims.ver }, secretKey(config), {
+  return jwt.sign({ ver: claims.ver, sid: claims.sid }, secretKey(config), {
     algorithm: 'HS256',
     expiresIn: config.jwt.ttl as jwt.SignOptions['expiresIn'],
     subject: claims.sub,
@@ -35,14 +38,32 @@ export function signSessionToken(config: Config, claims: TokenClaims): string {
   });
 }
 
-/** Verifies a session token with an explicit algorithm list; throws 401 when it is not valid. */
+/**
+ * Verifies a session token: explicit algorithm list, issuer, and at most the configured age
+ * (JWT_TTL) since it was issued, whatever `exp` it claims — a token without `iat`, or signed
+ * with a longer expiry, is refused. Throws 401 when it is not valid.
+ */
 export function verifySessionToken(config: Config, token: string): TokenClaims {
   try {
-    const payload = jwt.verify(token, secretKey(config), { algorithms: ['HS256'], issuer: 'ovalyard' });
-    if (typeof payload === 'string' || typeof payload.sub !== 'string') throw new Error('bad payload');
-    return { sub: payload.sub, ver: Number(payload.ver ?? 0) };
+    const payload = jwt.verify(token, secretKey(config), { algorithms: ['HS256'], issuer: 'ovalyard', maxAge: config.jwt.ttl });
+    if (typeof payload === 'string' || typeof payload.sub !== 'string' || typeof payload.sid !== 'string') throw new Error('bad payload');
+    // an expiry further out than the configured session length was not signed by this server's rules
+    if (typeof payload.exp !== 'number' || typeof payload.iat !== 'number' || (payload.exp - payload.iat) * 1000 > ttlMs(config.jwt.ttl)) {
+      throw new Error('expiry beyond the configured age');
+    }
+    return { sub: payload.sub, ver: Number(payload.ver ?? 0), sid: payload.sid };
   } catch {
     throw unauthenticated('Your session has ended. Sign in again.');
+  }
+}
+
+/** The claims of a token if it verifies, else null (sign-out needs no valid session). */
+export function readSessionToken(config: Config, token: string | undefined): TokenClaims | null {
+  if (!token) return null;
+  try {
+    return verifySessionToken(config, token);
+  } catch {
+    return null;
   }
 }
 

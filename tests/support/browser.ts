@@ -3,11 +3,11 @@
  * browser download), against the exported web app served by the real Express app.
  */
 import { execSync } from 'node:child_process';
-import type { Server } from 'node:http';
+import http, { type Server } from 'node:http';
 import path from 'node:path';
 import fs from 'node:fs';
 import { chromium, type Browser, type Page } from 'playwright-core';
-import { createApp } from '@/server/app';
+import { closeApp, createApp } from '@/server/app';
 import { loadConfig } from '@/server/config';
 import type { MailMessage, Mailer } from '@/server/services/mailer';
 import { seedDemo } from '@/server/seed/demo';
@@ -42,6 +42,12 @@ export interface ServedApp {
 export async function serveDemo(now = new Date(), options: { mailer?: Mailer } = {}): Promise<ServedApp> {
   const { sequelize, db, drop } = await createTestDatabase();
   await seedDemo(sequelize, now);
+  // Listen first: the app's APP_URL (the address in e-mailed links) is this server's own address.
+  const server: Server = http.createServer();
+  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
+  const address = server.address();
+  const port = typeof address === 'object' && address ? address.port : 0;
+  const url = `http://127.0.0.1:${port}`;
   const config = loadConfig({
     NODE_ENV: 'test',
     JWT_SECRET: 'e2e-secret-e2e-secret-e2e-secret-0000',
@@ -50,21 +56,37 @@ export async function serveDemo(now = new Date(), options: { mailer?: Mailer } =
     DB_USER: db.user,
     DB_PASSWORD: db.password,
     WEB_DIST: path.resolve(__dirname, '../../dist'),
+    APP_URL: url,
   });
   const mail: MailMessage[] = [];
   const app = createApp({ sequelize, config, serveWeb: true, log: () => {}, mailer: options.mailer ?? { send: async (m) => void mail.push(m) } });
-  const server: Server = await new Promise((resolve) => {
-    const s = app.listen(0, '127.0.0.1', () => resolve(s));
-  });
-  const address = server.address();
-  const port = typeof address === 'object' && address ? address.port : 0;
+  server.on('request', app);
   return {
-    url: `http://127.0.0.1:${port}`,
+    url,
     mail,
     close: async () => {
       await new Promise((r) => server.close(r));
+      await closeApp(app);
       await drop();
     },
+  };
+}
+
+/**
+ * Collects the Content-Security-Policy violations of every page a browser opens (Chromium logs
+ * them to the console; the page also reports `securitypolicyviolation` events to it).
+ */
+function watchCsp(browser: Browser, violations: string[]): void {
+  const newPage = browser.newPage.bind(browser);
+  browser.newPage = async (options) => {
+    const page = await newPage(options);
+    await page.addInitScript(() => {
+      document.addEventListener('securitypolicyviolation', (e) => console.error(`CSP violation: ${e.violatedDirective} blocked ${e.blockedURI}`));
+    });
+    page.on('console', (m) => {
+      if (/Content Security Policy|CSP violation/i.test(m.text())) violations.push(`${page.url()}: ${m.text()}`);
+    });
+    return page;
   };
 }
 
@@ -75,16 +97,20 @@ export async function serveDemo(now = new Date(), options: { mailer?: Mailer } =
 export function useDemoInBrowser(options: { mailer?: () => Mailer } = {}): { readonly url: string; readonly browser: Browser; readonly mail: MailMessage[] } {
   let served: ServedApp | undefined;
   let browser: Browser | undefined;
+  const cspViolations: string[] = [];
   beforeAll(async () => {
     if (!fs.existsSync(path.resolve(__dirname, '../../dist/index.html'))) {
       throw new Error('No web build in dist/: run npm test (it builds), or npm run build:web');
     }
     served = await serveDemo(new Date(), { mailer: options.mailer?.() });
     browser = await launchBrowser();
+    watchCsp(browser, cspViolations);
   });
   afterAll(async () => {
     await browser?.close();
     await served?.close();
+    // The app runs under the server's Content-Security-Policy: no page a test visited may break it.
+    if (cspViolations.length > 0) throw new Error(`Content-Security-Policy violations:\n${cspViolations.join('\n')}`);
   });
   return {
     get url() {

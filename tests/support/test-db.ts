@@ -4,7 +4,7 @@
  */
 import { randomBytes } from 'node:crypto';
 import { Sequelize } from 'sequelize';
-import { createApp } from '@/server/app';
+import { closeApp, createApp } from '@/server/app';
 import { loadConfig, type Config } from '@/server/config';
 import { createSequelize } from '@/server/db';
 import { migrateUp } from '@/server/migrate';
@@ -60,5 +60,13 @@ export async function createTestContext(env: Record<string, string> = {}): Promi
     ...env,
   });
   const app = createApp({ sequelize, config, log: process.env.TEST_LOG ? (m, e) => console.error(m, e) : () => {} });
-  return { sequelize, config, app, close: drop };
+  return {
+    sequelize,
+    config,
+    app,
+    close: async () => {
+      await closeApp(app);
+      await drop();
+    },
+  };
 }

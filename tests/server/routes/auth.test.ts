@@ -1,3 +1,4 @@
+import { QueryTypes } from 'sequelize';
 import request from 'supertest';
 import { createApp } from '@/server/app';
 import { buildShop, buildUser, TEST_PASSWORD } from '@/fixtures/builders';
@@ -63,7 +64,8 @@ describe('POST /api/auth/sign-in', () => {
   });
 
   it('sign-in past the attempt limit answers 429 TOO_MANY_ATTEMPTS', async () => {
-    const config = { ...ctx.config, signIn: { limit: 3, windowMs: 60_000 } };
+    await ctx.sequelize.query('DELETE FROM rate_limits', { type: QueryTypes.DELETE });
+    const config = { ...ctx.config, signIn: { limit: 3, accountLimit: 10, windowMs: 60_000 } };
     const limited = createApp({ sequelize: ctx.sequelize, config, log: () => {} });
     const codes: number[] = [];
     for (let i = 0; i < 5; i += 1) {

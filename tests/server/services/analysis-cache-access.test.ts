@@ -2,6 +2,7 @@ import { buildFitting, buildPlayer, buildShopWorld, buildUser } from '@/fixtures
 import { visibleFittingRevision } from '@/server/services/analysis-cache';
 import { loadActor } from '@/server/services/auth';
 import { findVisibleFitting } from '@/server/services/fittings';
+import { startSession } from '@/server/services/sessions';
 import { createTestContext, type TestContext } from '../../support/test-db';
 
 let ctx: TestContext;
@@ -26,7 +27,7 @@ describe('visibleFittingRevision', () => {
     const fittings = [a.fitting, othersFitting, b.fitting, b.otherFitting];
     let seen = 0;
     for (const user of users) {
-      const actor = (await loadActor(user.id, user.tokenVersion))!;
+      const actor = (await loadActor(user.id, user.tokenVersion, (await startSession(user.id, 60_000)).id))!;
       for (const fitting of fittings) {
         const expected = await outcome(findVisibleFitting(actor, fitting.id));
         expect(`${user.role} ${fitting.id}: ${await outcome(visibleFittingRevision(actor, fitting.id))}`).toBe(`${user.role} ${fitting.id}: ${expected}`);
@@ -39,7 +40,7 @@ describe('visibleFittingRevision', () => {
 
   it('visibleFittingRevision of an unknown fitting answers 404', async () => {
     const a = await buildShopWorld();
-    const actor = (await loadActor(a.owner.id, a.owner.tokenVersion))!;
+    const actor = (await loadActor(a.owner.id, a.owner.tokenVersion, (await startSession(a.owner.id, 60_000)).id))!;
     await expect(visibleFittingRevision(actor, '00000000-0000-4000-8000-000000000000')).rejects.toMatchObject({ status: 404 });
   });
 });
