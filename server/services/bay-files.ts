@@ -161,6 +161,10 @@ export async function commitBayFile(
   if (saveAs && (await RecipeModel.findOne({ where: { shopId: actor.shopId, name: saveAs }, attributes: ['id'] }))) throw recipeNameTaken();
   const bayFile = await withDeadlockRetry(() =>
     sequelize.transaction(async (transaction) => {
+      // The fitting's row first, locked for the whole transaction: a second import into the same
+      // fitting waits here instead of deadlocking later (both would hold the row's shared lock from
+      // the foreign-key checks and ask to upgrade it).
+      await bumpFittingRevision(fittingId, transaction);
       let created: BayFile;
       try {
         created = await BayFile.create(
@@ -183,7 +187,6 @@ export async function commitBayFile(
       }
       await ensureBuilds(fittingId, result.report.groups, transaction);
       await insertShots(transaction, created.id, fittingId, table, new Map(), hooks.afterChunk);
-      await bumpFittingRevision(fittingId, transaction);
       if (saveAs) {
         try {
           await RecipeModel.create({ shopId: actor.shopId, name: saveAs, recipe: JSON.stringify(result.recipe), createdBy: actor.id }, { transaction });
@@ -240,11 +243,11 @@ export async function remapBayFile(sequelize: Sequelize, pool: ImportPool, actor
   if (table.count === 0) throw new HttpError(400, 'NO_SHOTS', 'With this recipe no row could be imported; the file was left as it was.');
   await withDeadlockRetry(() =>
     sequelize.transaction(async (transaction) => {
+      await bumpFittingRevision(bayFile.fittingId, transaction); // the fitting's row first (see commitBayFile)
       const decisions = await decisionsOf(sequelize, bayFile.id, transaction);
       await sequelize.query('DELETE FROM shots WHERE bay_file_id = ?', { replacements: [bayFile.id], transaction });
       await ensureBuilds(bayFile.fittingId, result.report.groups, transaction);
       await insertShots(transaction, bayFile.id, bayFile.fittingId, table, decisions);
-      await bumpFittingRevision(bayFile.fittingId, transaction);
       await bayFile.update(
         { recipe: JSON.stringify(result.recipe), report: JSON.stringify(result.report), rowCount: result.report.rows, shotCount: table.count },
         { transaction },
@@ -258,8 +261,8 @@ export async function deleteBayFile(actor: Actor, id: string): Promise<void> {
   requireStaff(actor);
   const bayFile = await findVisibleBayFile(actor, id);
   await BayFile.sequelize!.transaction(async (transaction) => {
+    await bumpFittingRevision(bayFile.fittingId, transaction); // the fitting's row first (see commitBayFile)
     await bayFile.destroy({ transaction }); // shots go with it (ON DELETE CASCADE)
-    await bumpFittingRevision(bayFile.fittingId, transaction);
   });
 }
 
@@ -341,8 +344,8 @@ export async function updateBuild(actor: Actor, id: string, body: z.output<typeo
   const build = await findVisibleBuild(actor, id);
   for (const [key, value] of Object.entries(body)) if (value !== undefined) build.set(key as keyof typeof body, value as never);
   await Build.sequelize!.transaction(async (transaction) => {
+    await bumpFittingRevision(build.fittingId, transaction); // the fitting's row first (see commitBayFile)
     await build.save({ transaction });
-    await bumpFittingRevision(build.fittingId, transaction);
   });
   return toBuild(build);
 }

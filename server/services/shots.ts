@@ -105,8 +105,8 @@ export async function setShotDecision(sequelize: Sequelize, actor: Actor, shotId
   if (!rows[0]) throw notFound('That shot');
   await renameNotFound(findVisibleFitting(actor, rows[0].fitting_id), 'That shot');
   await sequelize.transaction(async (transaction) => {
+    await bumpFittingRevision(rows[0].fitting_id, transaction); // the fitting's row first (see commitBayFile)
     await sequelize.query('UPDATE shots SET decision = ? WHERE id = ?', { replacements: [decision, shotId], type: QueryTypes.UPDATE, transaction });
-    await bumpFittingRevision(rows[0].fitting_id, transaction);
   });
   return { id: shotId, decision };
 }

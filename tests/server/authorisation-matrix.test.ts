@@ -7,15 +7,23 @@
  * Adding a route: add one row to ROWS below —
  *   'METHOD /api/path/:param': { expect: [anonymous, playerA, playerB, fitterA, ownerA, fitterZ, ownerZ], … }
  * The target is always something of player A in shop A (a remote fitting, so A may upload);
- * shop Z is another shop. `params` fills the path (default: the world's records by name),
- * `send` makes the request body, `write` says the route changes the database.
+ * shop Z is another shop. `params` fills the path (default: the world's records by name) and may
+ * make a fresh record per call where a write uses one up (a bag club at version 1, a sheet to
+ * accept); `send` makes the request body (it gets those params; make it differ on every call so
+ * an accepted write always changes a row), `write` says the route changes the database. A route
+ * whose answer depends on its record's state gets a second row keyed with the state in
+ * parentheses ('GET /api/x/:id (a draft)'). A write to a table not yet in `fingerprint()` needs
+ * that table added there.
  */
 import { randomBytes } from 'node:crypto';
 import { QueryTypes } from 'sequelize';
 import request from 'supertest';
+import { buildBagClub } from '@/fixtures/bag-builders';
 import { buildFitting, buildPlayer, buildShop, buildUser } from '@/fixtures/builders';
-import { BayFile, Build, Recipe, Session, type User } from '@/server/models';
+import { BayFile, Build, ChosenBuild, type Fitting, type Player, Recipe, Session, type Shop, type User } from '@/server/models';
+import type { Mailer } from '@/server/services/mailer';
 import { insertShots } from '@/server/services/shot-store';
+import { sendSpecSheet } from '@/server/services/spec-sheets';
 import { signSessionToken } from '@/server/services/tokens';
 import { listRoutes } from '../support/route-list';
 import { createTestContext, type TestContext } from '../support/test-db';
@@ -30,8 +38,8 @@ interface Row {
   expect: [number, number, number, number, number, number, number];
   /** Path parameters; may make fresh records for each call (a delete, a new account). */
   params?: (w: World, role: Role) => Promise<Record<string, string>> | Record<string, string>;
-  /** Adds the body (JSON or multipart) to the request. */
-  send?: (req: Req, w: World, role: Role) => Req;
+  /** Adds the body (JSON or multipart) to the request; gets the params made for this call. */
+  send?: (req: Req, w: World, role: Role, params: Record<string, string>) => Req;
   /** The route changes the database when it succeeds. */
   write?: boolean;
 }
@@ -99,7 +107,76 @@ const ROWS: Record<string, Row> = {
   'PATCH /api/shots/:shotId': { expect: [401, 403, 403, 200, 200, 404, 404], params: async (w) => ({ shotId: String(await firstShot((await storeBayFile(w)).id)) }), send: json({ decision: 'drop' }), write: true },
   'GET /api/fittings/:id/builds': { expect: [401, 200, 404, 200, 200, 404, 404], params: (w) => ({ id: w.fittingA.id }) },
   'PATCH /api/builds/:id': { expect: [401, 403, 403, 200, 200, 404, 404], params: (w) => ({ id: w.buildA.id }), send: () => null as never, write: true },
+  'GET /api/builds/:id': { expect: [401, 200, 404, 200, 200, 404, 404], params: (w) => ({ id: w.buildA.id }) },
+  // the exports are staff tools: a player gets 403 before any lookup, another shop 404
+  'GET /api/fittings/:id/shots.csv': { expect: [401, 403, 403, 200, 200, 404, 404], params: (w) => ({ id: w.fittingA.id }) },
+  'GET /api/fittings/:id/groups.csv': { expect: [401, 403, 403, 200, 200, 404, 404], params: (w) => ({ id: w.fittingA.id }) },
+
+  'GET /api/recipes/:id': { expect: [401, 403, 403, 200, 200, 404, 404], params: (w) => ({ id: w.recipeA.id }) },
+  // the owner manages the shop's recipes: a fitter of any shop 403, another shop's owner 404
+  'PATCH /api/recipes/:id': { expect: [401, 403, 403, 403, 200, 403, 404], params: (w) => ({ id: w.recipeA.id }), send: (req) => req.send({ name: `Recipe ${unique()}` }), write: true },
+
+  'GET /api/demo': { expect: [200, 200, 200, 200, 200, 200, 200] },
+
+  // each caller's own shop: staff read, the owner writes
+  'GET /api/shop/margins': { expect: [401, 403, 403, 200, 200, 200, 200] },
+  'PUT /api/shop/margins': { expect: [401, 403, 403, 403, 200, 403, 200], send: (req) => req.send({ margins: {}, fairwayWidthM: 5 + (next() % 95) }), write: true },
+  'GET /api/workshop-settings': { expect: [401, 403, 403, 200, 200, 200, 200] },
+  'PUT /api/workshop-settings': {
+    expect: [401, 403, 403, 403, 200, 403, 200],
+    send: (req) => req.send({ wedgeWearRounds: 1 + (next() % 999), wedgeWearPracticeSessions: 40, staticFitTable: [{ heightFromCm: null, heightToCm: null, wristFromCm: null, wristToCm: null, lengthChangeIn: 0 }] }),
+    write: true,
+  },
+
+  'GET /api/players/:id/bag': { expect: [401, 200, 404, 200, 200, 404, 404], params: (w) => ({ id: w.playerA.id }) },
+  'POST /api/players/:id/bag/clubs': { expect: [401, 403, 403, 201, 201, 404, 404], params: (w) => ({ id: w.playerA.id }), send: (req) => req.send({ club: '4I', carryEnteredM: 100 + (next() % 300) }), write: true },
+  // a fresh club (version 1) per call: an accepted save raises the version
+  'PATCH /api/bag-clubs/:id': {
+    expect: [401, 403, 403, 200, 200, 404, 404],
+    params: async (w) => ({ id: (await buildBagClub(w.playerA, '9I')).id }),
+    send: (req) => req.send({ version: 1, carryEnteredM: 100 + (next() % 300) }),
+    write: true,
+  },
+  // the player records their own wedge's use
+  'PATCH /api/bag-clubs/:id/wear': {
+    expect: [401, 200, 404, 200, 200, 404, 404],
+    params: async (w) => ({ id: (await buildBagClub(w.playerA, 'SW')).id }),
+    send: (req) => req.send({ version: 1, roundsSince: next() }),
+    write: true,
+  },
+  'GET /api/bag-clubs/:id/history': { expect: [401, 200, 404, 200, 200, 404, 404], params: (w) => ({ id: w.bagClubA.id }) },
+
+  'GET /api/fittings/:id/chosen-builds': { expect: [401, 200, 404, 200, 200, 404, 404], params: (w) => ({ id: w.chosenFittingA.id }) },
+  // a fresh fitting with a build per call; the body chooses that build
+  'PUT /api/fittings/:id/chosen-builds': {
+    expect: [401, 403, 403, 200, 200, 404, 404],
+    params: async (w) => {
+      const fitting = await buildFitting(w.shopA, w.playerA, w.fitterA);
+      return { id: fitting.id, buildId: (await Build.create({ fittingId: fitting.id, club: 'PW', label: `Choice ${unique()}` })).id };
+    },
+    send: (req, _w, _role, params) => req.send({ builds: [{ buildId: params.buildId, replacesBagClubId: null }] }),
+    write: true,
+  },
+  // a fresh fitting whose chosen build adds a club (nothing to replace, so no versions to send)
+  'POST /api/fittings/:id/chosen-builds/confirm': {
+    expect: [401, 403, 403, 200, 200, 404, 404],
+    params: async (w) => ({ id: (await chosenFitting(w)).id }),
+    send: json({ versions: {} }),
+    write: true,
+  },
+
+  // the player sees the sheet once sent, never the draft
+  'GET /api/fittings/:id/spec-sheet': { expect: [401, 200, 404, 200, 200, 404, 404], params: (w) => ({ id: w.sheetA.fittingId }) },
+  'GET /api/fittings/:id/spec-sheet (a draft)': { expect: [401, 404, 404, 200, 200, 404, 404], params: (w) => ({ id: w.chosenFittingA.id }) },
+  'POST /api/fittings/:id/spec-sheet/send': { expect: [401, 403, 403, 200, 200, 404, 404], params: async (w) => ({ id: (await chosenFitting(w)).id }), write: true },
+  'GET /api/spec-sheets/:id': { expect: [401, 200, 404, 200, 200, 404, 404], params: (w) => ({ id: w.sheetA.id! }) },
+  'GET /api/spec-sheets/:id/pdf': { expect: [401, 200, 404, 200, 200, 404, 404], params: (w) => ({ id: w.sheetA.id! }) },
+  // only the player accepts their sheet: staff of any shop 403 before the lookup; a fresh sheet per call
+  'POST /api/spec-sheets/:id/accept': { expect: [401, 200, 404, 403, 403, 403, 403], params: async (w) => ({ id: (await sentSheet(w)).id! }), write: true },
 };
+
+/** The route a row's key names (a key may add the record's state in parentheses). */
+const routeOf = (key: string) => key.replace(/ \([^)]*\)$/, '');
 
 // Bodies that must differ on every call, so an accepted write always changes a row.
 let counter = 0;
@@ -140,6 +217,23 @@ async function firstShot(bayFileId: string): Promise<number> {
   return Number(shot.id);
 }
 
+/** A fresh fitting of player A with one build chosen, added to the bag beside the others. */
+async function chosenFitting(w: { shopA: Shop; playerA: Player; fitterA: User }): Promise<Fitting> {
+  const fitting = await buildFitting(w.shopA, w.playerA, w.fitterA);
+  const build = await Build.create({ fittingId: fitting.id, club: 'DR', label: `Choice ${unique()}`, loftDeg: 10.5 });
+  await ChosenBuild.create({ fittingId: fitting.id, buildId: build.id, club: build.club, replacesBagClubId: null });
+  return fitting;
+}
+
+const quietMailer: Mailer = { async send() {} };
+
+/** A fresh spec sheet sent to player A (through the service, as fitter A). */
+async function sentSheet(w: { shopA: Shop; playerA: Player; fitterA: User }) {
+  const fitting = await chosenFitting(w);
+  const actor = { id: w.fitterA.id, role: w.fitterA.role, shopId: w.shopA.id, playerId: null, units: w.fitterA.units };
+  return sendSpecSheet(ctx.sequelize, actor, fitting.id, quietMailer, 'https://ovalyard.test');
+}
+
 async function buildWorld() {
   const shopA = await buildShop();
   const shopZ = await buildShop();
@@ -150,13 +244,18 @@ async function buildWorld() {
   const ownerZ = await buildUser(shopZ, 'owner');
   const fitterZ = await buildUser(shopZ, 'fitter');
   const playerA = await buildPlayer(shopA, { userId: userA.id });
+  await playerA.update({ email: `player-a-${unique()}@test.example` }); // a sheet is sent to it
   await buildPlayer(shopA, { userId: userB.id });
   const fittingA = await buildFitting(shopA, playerA, fitterA, { remote: true });
   const partial = { shopA, fittingA, fitterA };
   const bayFileA = await storeBayFile(partial);
   const buildA = await Build.create({ fittingId: fittingA.id, club: '7I', label: '' });
+  const recipeA = await Recipe.create({ shopId: shopA.id, name: `r-${unique()}`, recipe: '{"columns":{}}', createdBy: fitterA.id });
+  const bagClubA = await buildBagClub(playerA, '7I', { loftDeg: 34 });
+  const chosenFittingA = await chosenFitting({ shopA, playerA, fitterA });
+  const sheetA = await sentSheet({ shopA, playerA, fitterA });
   const users: Record<Exclude<Role, 'anonymous'>, User> = { playerA: userA, playerB: userB, fitterA, ownerA, fitterZ, ownerZ };
-  return { shopA, shopZ, users, playerA, fitterA, fittingA, bayFileA, buildA };
+  return { shopA, shopZ, users, playerA, fitterA, fittingA, bayFileA, buildA, recipeA, bagClubA, chosenFittingA, sheetA };
 }
 
 /** A fresh session token for a role (sign-out and sign-out-everywhere end sessions as they go). */
@@ -170,14 +269,19 @@ async function tokenFor(role: Role): Promise<string | null> {
 /** A fingerprint of every table a request may change (sessions and rate limits aside: requests make those). */
 async function fingerprint(): Promise<string> {
   const rows = await ctx.sequelize.query<{ Table: string; Checksum: number | bigint }>(
-    'CHECKSUM TABLE shops, users, players, fittings, bay_files, shots, builds, recipes, password_resets',
+    `CHECKSUM TABLE shops, users, players, fittings, bay_files, shots, builds, recipes, password_resets, shop_margins,
+       bag_clubs, bag_club_history, chosen_builds, chosen_take_outs, chosen_build_confirmations, spec_sheets, workshop_settings`,
     { type: QueryTypes.SELECT },
   );
   return rows.map((r) => `${r.Table}:${String(r.Checksum)}`).join(' ');
 }
 
 beforeAll(async () => {
+  // Without SMTP_URL the app's mailer writes each message to console.log; the app keeps the
+  // function it was given, so a silenced one keeps the sends of the matrix out of the output.
+  const quiet = jest.spyOn(console, 'log').mockImplementation(() => {});
   ctx = await createTestContext();
+  quiet.mockRestore();
   world = await buildWorld();
 });
 afterAll(async () => {
@@ -187,22 +291,23 @@ afterAll(async () => {
 describe('authorisation matrix', () => {
   it('every route of the app has a row in the matrix (and every row a route)', () => {
     const routes = listRoutes(ctx.app);
-    expect(routes.filter((r) => !(r in ROWS))).toEqual([]);
-    expect(Object.keys(ROWS).filter((r) => !routes.includes(r))).toEqual([]);
+    const rowRoutes = new Set(Object.keys(ROWS).map(routeOf));
+    expect(routes.filter((r) => !rowRoutes.has(r))).toEqual([]);
+    expect(Object.keys(ROWS).filter((r) => !routes.includes(routeOf(r)))).toEqual([]);
   });
 
   const cells = Object.entries(ROWS).flatMap(([route, row]) => ROLES.map((role, i) => [route, role, row.expect[i]] as const));
 
   it.each(cells)('%s as %s answers %i', async (route, role, status) => {
     const row = ROWS[route];
-    const [method, template] = route.split(' ');
+    const [method, template] = routeOf(route).split(' ');
     const params = row.params ? await row.params(world, role) : {};
     const path = template.replace(/:(\w+)/g, (_, name: string) => encodeURIComponent(params[name]));
     const token = await tokenFor(role);
     const before = row.write ? await fingerprint() : '';
     let req = (request(ctx.app) as unknown as Record<string, (p: string) => Req>)[method.toLowerCase()](path);
     if (token) req = req.set('Authorization', `Bearer ${token}`);
-    if (row.send) req = row.send(req, world, role);
+    if (row.send) req = row.send(req, world, role, params);
     const res = await req;
     expect({ status: res.status, code: res.body?.error?.code }).toMatchObject({ status });
     if (res.status >= 500) throw new Error(`5xx: ${JSON.stringify(res.body)}`);
