@@ -59,7 +59,7 @@ describe('from a fitting to the bag and the spec sheet in the browser', () => {
   it('a demo fitter chooses the driver build, confirms the bag change and sends the sheet; it arrives with its PDF; the player accepts it on a phone', async () => {
     const page = await demo.browser.newPage({ viewport: DESKTOP });
     await signInAs(page, demo.url, 'oskar@larchmere.example');
-    await page.goto(`${demo.url}/fittings/${fittingId}`);
+    await page.goto(`${demo.url}/fittings/${fittingId}?view=builds`);
     await page.getByRole('heading', { name: 'Chosen for the bag' }).waitFor({ timeout: 30_000 });
 
     await page.getByLabel('Chosen build, driver').selectOption({ label: 'Loft up + heel 6 g' });

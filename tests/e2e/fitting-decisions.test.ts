@@ -97,6 +97,8 @@ describe('the fitting page’s decisions', () => {
     await openSevenIron(page);
     await page.getByRole('tab', { name: 'Shots' }).click();
     await page.getByLabel('Shot table').waitFor({ timeout: 30_000 });
+    // Both tables (groups and shots) overflow a phone and say so, once each has measured itself.
+    await page.getByText('Swipe or scroll sideways for more columns →').nth(1).waitFor({ timeout: 15_000 });
     expect(await page.getByText('Swipe or scroll sideways for more columns →').count()).toBe(2);
     await page.getByRole('button', { name: /^Sort by Carry/ }).click();
     await page.getByRole('button', { name: 'Sort by Carry, now ascending' }).waitFor({ timeout: 15_000 });
@@ -124,7 +126,9 @@ describe('the fitting page’s decisions', () => {
     const b = (await button.boundingBox())!;
     const c = (await changed.boundingBox())!;
     expect(c.y - (b.y + b.height)).toBeLessThan(120);
-    expect(await page.getByText(/^Graphite 75 R: carry [\d.]+ yd → [\d.]+ yd \(\+[\d.]+ yd\)$/).count()).toBe(1);
+    // The sign is the flight model's (a slow iron in thin, warm air meets the drag crisis sooner and
+    // can carry less; the model's own tests check that); here: one line per build, in words.
+    expect(await page.getByText(/^Graphite 75 R: carry [\d.]+ yd → [\d.]+ yd \([+−][\d.]+ yd\)$/).count()).toBe(1);
     await page.close();
   });
 });
