@@ -2,6 +2,7 @@ import { useRouter } from 'expo-router';
 import type { ReactNode } from 'react';
 import { colors } from '../theme';
 import { AppHeader } from './app-header';
+import { routeTitle } from './route-titles';
 
 /** What a navigator hands its `header` option (the parts Ovalyard reads). */
 type HeaderInput = {
@@ -20,7 +21,7 @@ function StackHeader({ options, route, navigation, back }: HeaderInput): ReactNo
   const router = useRouter();
   return (
     <AppHeader
-      title={options.title ?? route.name}
+      title={options.title ?? routeTitle(route.name)}
       back={back ? { label: 'Back', onPress: () => navigation.goBack() } : { label: 'Back to the start page', onPress: () => router.replace('/') }}
     />
   );
@@ -28,7 +29,7 @@ function StackHeader({ options, route, navigation, back }: HeaderInput): ReactNo
 
 /** The tabs' header: a title and no way back (the tab bar is the way around). */
 function TabHeader({ options, route }: HeaderInput): ReactNode {
-  return <AppHeader title={options.title ?? route.name} back={null} />;
+  return <AppHeader title={options.title ?? routeTitle(route.name)} back={null} />;
 }
 
 /** Header and page colour of every signed-in Stack (a nested one too: spread these into its screenOptions). */
