@@ -41,7 +41,10 @@ beforeAll(async () => {
   });
   await new Promise<void>((resolve) => smtp.listen(0, '127.0.0.1', resolve));
   const { port } = smtp.server.address() as AddressInfo;
-  ctx = await createTestContext({ SMTP_URL: `smtp://127.0.0.1:${port}/?ignoreTLS=true`, APP_URL: 'https://ovalyard.test' });
+  // The links name the HTTPS address; the agents talk plain HTTP on loopback, so cookies go without
+  // the Secure flag here (with APP_URL on https they would get it, and a browser would keep them
+  // off plain HTTP).
+  ctx = await createTestContext({ SMTP_URL: `smtp://127.0.0.1:${port}/?ignoreTLS=true`, APP_URL: 'https://ovalyard.test', COOKIE_SECURE: '0' });
   world = await buildShopWorld();
   rival = await buildShopWorld();
   await Player.update({ email: 'player-a@test.example' }, { where: { id: world.player.id } });
