@@ -84,10 +84,14 @@ function toShot(r: ShotRow): StoredShot {
   return { id: Number(r.id), bayFileId: r.bay_file_id, row: r.row_number, club: r.club, build: r.build, values, derived, decision: r.decision };
 }
 
-/** Every shot of a fitting, in file and row order. */
+/**
+ * Every shot of a fitting, in file and row order: files by upload time, and files uploaded in the
+ * same second by their shots' insertion order (ids rise along the rows of a file), never by the
+ * files' random ids.
+ */
 export async function loadFittingShots(sequelize: Sequelize, fittingId: string): Promise<StoredShot[]> {
   const rows = await sequelize.query<ShotRow>(
-    'SELECT s.* FROM shots s JOIN bay_files b ON b.id = s.bay_file_id WHERE s.fitting_id = ? ORDER BY b.created_at, s.bay_file_id, s.`row_number`',
+    'SELECT s.* FROM shots s JOIN bay_files b ON b.id = s.bay_file_id WHERE s.fitting_id = ? ORDER BY b.created_at, s.id',
     { replacements: [fittingId], type: QueryTypes.SELECT },
   );
   return rows.map(toShot);
