@@ -8,7 +8,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { simulateFlight } from '@/analysis/flight';
-import { normalFrom, seededRandom } from './lib/seeded-random';
+import { normalFrom, seededRandom } from '@/fixtures/seeded-random';
 
 const OUT = path.resolve(__dirname, '../fixtures/demo');
 const MPH = 0.44704;

@@ -2,7 +2,7 @@
 // Run: node --import tsx -e "console.log(require('./scripts/bench/analyse.ts').benchAnalyse())"
 import type { Shot, ShotField } from '@/analysis/fields';
 import { analyseSession } from '@/analysis/session';
-import { seededRandom } from '../lib/seeded-random';
+import { seededRandom } from '@/fixtures/seeded-random';
 
 const CLUBS = ['DR', '3W', '5W', '4H', '5I', '6I', '7I', '8I', '9I', 'PW', 'GW', 'SW', 'LW', 'W58'];
 const BUILDS = ['A', 'B', 'C'];

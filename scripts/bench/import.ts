@@ -7,7 +7,7 @@ import Papa from 'papaparse';
 import v8 from 'node:v8';
 import vm from 'node:vm';
 import { importBayFile, shotValuesSchema, checkShotValues } from '@/analysis/import';
-import { seededRandom } from '../lib/seeded-random';
+import { seededRandom } from '@/fixtures/seeded-random';
 
 const HEADERS = [
   'Shot', 'Club', 'Build', 'Ball Speed (mph)', 'Club Speed (mph)', 'Smash', 'Launch Angle (deg)',
