@@ -1,4 +1,5 @@
 import { DataTypes, type ModelAttributeColumnOptions } from 'sequelize';
+import type { PrintableSpec } from '@/analysis/bag';
 
 /** The spec columns a build and a bag club share (server/schemas/build-spec.ts), fresh objects each call. */
 export function specAttributes(): Record<keyof SpecAttributes, ModelAttributeColumnOptions> {
@@ -29,29 +30,8 @@ export function specAttributes(): Record<keyof SpecAttributes, ModelAttributeCol
   };
 }
 
-/** The spec attributes as model fields (declare these in each model class). */
-export interface SpecAttributes {
-  head: string | null;
-  loftDeg: number | null;
-  hoselSetting: string | null;
-  hoselLoftChangeDeg: number | null;
-  hoselLieChangeDeg: number | null;
-  hoselFaceChangeDeg: number | null;
-  lieDeg: number | null;
-  lengthIn: number | null;
-  shaft: string | null;
-  shaftWeightG: number | null;
-  shaftFlex: string | null;
-  torqueDeg: number | null;
-  grip: string | null;
-  gripSize: string | null;
-  swingWeight: string | null;
-  totalWeightG: number | null;
-  balancePointIn: number | null;
-  addedMassG: number | null;
-  addedMassWhere: string | null;
-  notes: string | null;
-}
+/** The spec attributes as model fields (declare these in each model class): the printable spec of analysis/bag. */
+export type SpecAttributes = PrintableSpec;
 
 export const SPEC_ATTRIBUTE_KEYS: readonly (keyof SpecAttributes)[] = [
   'head', 'loftDeg', 'hoselSetting', 'hoselLoftChangeDeg', 'hoselLieChangeDeg', 'hoselFaceChangeDeg', 'lieDeg', 'lengthIn',
