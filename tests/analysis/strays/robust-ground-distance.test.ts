@@ -69,6 +69,24 @@ describe('robustGroundDistances', () => {
     expect(r.scaleCarry).toBeCloseTo(1.4826 * 3, 9);
   });
 
+  // MAD 0 across (four of five shots on the line): the scale falls back to √(π/2) × the mean
+  // absolute deviation, √(π/2) = 1.2533141 being σ over the mean deviation of a normal
+  // distribution (Geary, "The ratio of the mean deviation to the standard deviation as a test of
+  // normality", Biometrika 27, 1935: mean deviation / σ = √(2/π)); the same fallback as IBM's
+  // documentation of the modified z score (Cognos Analytics 11.1, "Modified z score").
+  // Mean deviation about the median 0: (0+0+0+0+5)/5 = 1 m.
+  it('robustGroundDistances with MAD 0 across scales by √(π/2) × the mean absolute deviation', () => {
+    const r = robustGroundDistances([0, 0, 0, 0, 5], [150, 152, 148, 151, 149]);
+    expect(r.scaleOffline).toBeCloseTo(Math.sqrt(Math.PI / 2) * 1, 6);
+    // Carry: median 150, deviations 0, 2, 2, 1, 1 → MAD 1, scale 1.4826 (1/Φ⁻¹(0.75)).
+    expect(r.scaleCarry).toBeCloseTo(1.4826, 9);
+    // Shot 5: 5 m right and 1 m short of the centre in standardised units.
+    const u = 5 / Math.sqrt(Math.PI / 2);
+    const v = -1 / 1.4826;
+    const rho = r.correlation;
+    expect(r.distances[4]).toBeCloseTo(Math.sqrt((u * u - 2 * rho * u * v + v * v) / (1 - rho * rho)), 5);
+  });
+
   it('robustGroundDistances with a missing value gives NaN there', () => {
     const r = robustGroundDistances([0, 1, Number.NaN, -1, 2], [150, 151, 150, 149, 150]);
     expect(r.distances[2]).toBeNaN();
