@@ -1,9 +1,12 @@
 /**
- * `npm run mutate [-- TARGET ...] [-- --report]`: mutation testing of analysis/ with StrykerJS
+ * `npm run mutate [-- TARGET ...] [-- --static] [-- --report]`: mutation testing of analysis/ with StrykerJS
  * (Jest runner, TypeScript checker; config in stryker.config.mjs). Each TARGET is a folder or
  * file of analysis/ (`analysis/strays`, `strays`, `analysis/units.ts`); with none, all of
  * analysis/. Targets run one after another; at the end the mutation score per folder is printed
- * from every JSON report under reports/mutation/. `--report` only prints the scores.
+ * from every JSON report under reports/mutation/. `--report` only prints the scores. `--static`
+ * also mutates module-level code (tables, constants), which reruns every test of the target per
+ * mutant (MUTATE_STATIC=1); without it those mutants are reported as Ignored.
+ * MUTATE_TESTS=a,b (paths under tests/analysis) picks the tests instead of the target's mirror.
  * Not part of `npm test`: a folder takes minutes to an hour.
  * Exit status: 0 done, 1 a Stryker run failed, 2 bad arguments.
  */
@@ -87,7 +90,7 @@ function printScores() {
 function main() {
   const args = process.argv.slice(2);
   if (args.includes('--help')) {
-    console.log('npm run mutate [-- analysis/FOLDER|analysis/FILE.ts ...] [-- --report]');
+    console.log('npm run mutate [-- analysis/FOLDER|analysis/FILE.ts ...] [-- --static] [-- --report]');
     return;
   }
   if (!args.includes('--report')) {
@@ -97,7 +100,7 @@ function main() {
       const run = spawnSync(path.join(ROOT, 'node_modules', '.bin', 'stryker'), ['run', 'stryker.config.mjs'], {
         cwd: ROOT,
         stdio: 'inherit',
-        env: { ...process.env, MUTATE_TARGET: target },
+        env: { ...process.env, MUTATE_TARGET: target, ...(args.includes('--static') ? { MUTATE_STATIC: '1' } : {}) },
       });
       if (run.status !== 0) {
         console.error(`mutate: Stryker failed on ${target} (exit ${run.status ?? run.signal})`);
