@@ -17,7 +17,7 @@ const point = fc.tuple(fc.integer({ min: -4000, max: 4000 }), fc.integer({ min: 
 const cloud = fc.array(point, { minLength: 4, maxLength: 40 });
 
 describe('groundOval', () => {
-  // Computed in CHECKS.md from the NIST e-Handbook covariance: eigenvalues 0.0277154 and 0.0042846,
+  // Computed by hand from the NIST/SEMATECH e-Handbook §6.5.4.1 covariance (2x2 eigen closed form): eigenvalues 0.0277154 and 0.0042846,
   // major axis 19.903° from the first axis, 95% χ² semi-axes 0.40750 and 0.16022.
   it('groundOval on the NIST e-Handbook example gives its 95% semi-axes and angle', () => {
     const oval = groundOval(X1, X2);

@@ -108,7 +108,8 @@ describe('analyseSession', () => {
     const wide = analyseSession(session()).groups[1].oval!;
     const narrow = analyseSession(session(), { level: 0.68 }).groups[1].oval!;
     expect(narrow.level).toBe(0.68);
-    // Semi-axes scale with sqrt of the χ²₂ quantile: sqrt(2.278868566 / 5.991464547) (CHECKS.md values).
+    // Semi-axes scale with sqrt of the χ²₂ quantile: sqrt(2.278868566 / 5.991464547) (Abramowitz & Stegun, 1964, §26.4: −2·ln(1 − p)
+    // for ν = 2).
     expect(narrow.semiMajor / wide.semiMajor).toBeCloseTo(Math.sqrt(2.278868566 / 5.991464547), 8);
   });
 

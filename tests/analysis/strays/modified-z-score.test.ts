@@ -32,14 +32,19 @@ describe('modifiedZScores', () => {
     );
   });
 
-  // MAD 0 → mean absolute deviation 0.8 about median 5; M(9) = 4/(1.253314·0.8) = 3.989 (computed; the
-  // 1.253314 fallback convention is from memory, see the source file).
-  it('modifiedZScores with MAD 0 scales by the mean absolute deviation instead', () => {
+  // MAD 0: IBM's documentation of the modified z score (Cognos Analytics 11.1, "Modified z score")
+  // divides by 1.253314·MeanAD instead, 1.253314 = √(π/2) being σ over the mean absolute
+  // deviation of a normal distribution (Geary, Biometrika 27, 1935: mean deviation/σ = √(2/π)).
+  // Here the mean absolute deviation about the median 5 is 0.8, so M(9) = 4/(√(π/2)·0.8) = 3.9894.
+  it('modifiedZScores with MAD 0 scales by √(π/2) × the mean absolute deviation instead', () => {
     const z = modifiedZScores([5, 5, 5, 5, 9]);
     expect(z.mad).toBe(0);
     expect(z.scale).toBe('meanAbsoluteDeviation');
-    expect(z.scores[4]).toBeCloseTo(4 / (1.253314 * 0.8), 9);
+    expect(z.scores[4]).toBeCloseTo(4 / (Math.sqrt(Math.PI / 2) * 0.8), 6);
+    expect(z.scores[4]).toBeCloseTo(3.9894, 4);
     expect(z.scores[0]).toBe(0);
+    // The MAD-equivalent scale: 0.6745 · √(π/2) · 0.8.
+    expect(z.madUsed).toBeCloseTo(0.6745 * Math.sqrt(Math.PI / 2) * 0.8, 6);
   });
 
   // With the floor, the MAD used is max(MAD, floor): here MAD 0, floor 0.01, so
