@@ -36,3 +36,15 @@ describe('predictionScale2', () => {
     expect(() => predictionScale2(2, 0.95)).toThrow(RangeError);
   });
 });
+
+describe('predictionScale2 at its boundary', () => {
+  // n = 3: F(2, 1; q) = ½·((1 − q)^(−2) − 1) in closed form (F with 2 numerator degrees of freedom),
+  // at 95% ½·(400 − 1) = 199.5, so k² = 2·2·4/(3·1)·199.5 = 1064 (Chew, JASA 61, 1966).
+  it('predictionScale2 with 3 shots at 95% gives 1064', () => {
+    expect(predictionScale2(3, 0.95)).toBeCloseTo(1064, 6);
+  });
+  it('predictionScale2 with fewer than 3 shots throws that it needs 3', () => {
+    expect(() => predictionScale2(2, 0.95)).toThrow('predictionScale2 needs at least 3 shots');
+    expect(() => predictionScale2(Number.NaN, 0.95)).toThrow('predictionScale2 needs at least 3 shots');
+  });
+});
