@@ -5,6 +5,8 @@ import {
   toCanonical,
   unitFactor,
   UnitError,
+  unitInfo,
+  unitSystemOf,
   UNITS,
 } from '@/analysis/units';
 import { SHOT_FIELDS } from '@/analysis/fields';
@@ -105,6 +107,28 @@ describe('findUnit', () => {
     expect(findUnit(alias)?.unit).toBe(unit);
   });
 
+  it('findUnit reads a unit written with a trailing full stop, capitals or doubled spaces', () => {
+    expect(findUnit('Yds.')?.unit).toBe('yd');
+    expect(findUnit('  MILES   PER  HOUR ')?.unit).toBe('mph');
+    expect(findUnit('rev/min.')?.unit).toBe('rpm');
+  });
+
+  it('unitInfo of a known alias gives the unit; of an unknown one throws UNKNOWN_UNIT naming it', () => {
+    expect(unitInfo('kph')).toMatchObject({ unit: 'km/h', dimension: 'speed' });
+    expect(() => unitInfo('cubits')).toThrow(new UnitError('UNKNOWN_UNIT', 'cubits', 'Unknown unit "cubits"'));
+    expect(() => unitInfo('cubits')).toThrow('Unknown unit "cubits"');
+  });
+
+  // Imperial units per NIST SP 811 (2008), Appendix B (yard, foot, mile per hour); SI and SI-accepted
+  // units per the SI Brochure (metre, metre per second, kilometre per hour is SI-accepted).
+  it.each([
+    ['yards', 'imperial'], ['ft', 'imperial'], ['MPH', 'imperial'], ['fps', 'imperial'],
+    ['metres', 'metric'], ['m/s', 'metric'], ['kph', 'metric'],
+    ['rpm', null], ['deg', null], ['s', null], ['furlongs', null],
+  ] as const)('unitSystemOf %s gives %s', (unit, system) => {
+    expect(unitSystemOf(unit)).toBe(system);
+  });
+
   it('findUnit of an unknown unit gives null', () => {
     expect(findUnit('furlongs')).toBeNull();
     expect(findUnit('')).toBeNull();
@@ -137,6 +161,13 @@ describe('displayUnits', () => {
   it('displayUnits metric gives metres and km/h', () => {
     const u = displayUnits('metric');
     expect([u.carry, u.offline, u.ballSpeed, u.apexHeight]).toEqual(['m', 'm', 'km/h', 'm']);
+  });
+
+  it('displayUnits of either system keeps angles in degrees, spin in rpm, time in seconds', () => {
+    for (const system of ['imperial', 'metric'] as const) {
+      const u = displayUnits(system);
+      expect([u.launchAngle, u.spinAxis, u.spinRate, u.flightTime, u.smashFactor]).toEqual(['deg', 'deg', 'rpm', 's', 'ratio']);
+    }
   });
 
   it('displayUnits gives every field a unit fromCanonical accepts', () => {
