@@ -93,10 +93,33 @@ describe('robustGroundDistances', () => {
     expect(r.distances[0]).toBeGreaterThanOrEqual(0);
   });
 
+  // Carry: median 150, deviations 10, 0, 1, 1, 0 → MAD 1, scale 1.4826 (1/Φ⁻¹(0.75)); with no
+  // spread across, the distance is the carry part alone: |140 − 150|/1.4826 = 6.7449.
   it('robustGroundDistances with no spread across uses carry alone', () => {
     const r = robustGroundDistances([0, 0, 0, 0, 0], [140, 150, 151, 149, 150]);
     expect(r.scaleOffline).toBe(0);
-    expect(Number.isFinite(r.distances[0])).toBe(true);
+    expect(r.correlation).toBe(0);
+    expect(r.distances[0]).toBeCloseTo(10 / 1.4826, 9);
+    expect(r.distances[2]).toBeCloseTo(1 / 1.4826, 9);
+  });
+
+  // Shots on a line have correlation ±1 by Gnanadesikan & Kettenring's identity (the scale of the
+  // difference of the standardised axes is 0); it is held at ±0.99 so distances stay finite.
+  it('robustGroundDistances of shots on a rising or falling line holds the correlation at ±0.99', () => {
+    const x = [-2, -1, 0, 1, 2, 3];
+    const up = robustGroundDistances(x, x.map((v) => 150 + 2 * v));
+    expect(up.correlation).toBe(0.99);
+    const down = robustGroundDistances(x, x.map((v) => 150 - 2 * v));
+    expect(down.correlation).toBe(-0.99);
+    for (const d of [...up.distances, ...down.distances]) expect(Number.isFinite(d)).toBe(true);
+  });
+
+  it('robustGroundDistances of no complete pair gives NaN centres and distances', () => {
+    const r = robustGroundDistances([Number.NaN, 1], [150, Number.NaN]);
+    expect(r.centerOffline).toBeNaN();
+    expect(r.centerCarry).toBeNaN();
+    expect(r.correlation).toBe(0);
+    expect([...r.distances].every(Number.isNaN)).toBe(true);
   });
 
   // Property: the distance does not change when the shots are moved, stretched per axis or shuffled.
