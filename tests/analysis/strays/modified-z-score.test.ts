@@ -75,6 +75,34 @@ describe('modifiedZScores', () => {
     const z = modifiedZScores([1.45, 1.45, 1.45]);
     expect(z.scale).toBe('none');
     expect([...z.scores]).toEqual([0, 0, 0]);
+    expect(z.madUsed).toBe(0);
+  });
+
+  it('modifiedZScores with no finite value gives NaN everywhere and no scale', () => {
+    const z = modifiedZScores([Number.NaN, Number.POSITIVE_INFINITY]);
+    expect(z.scale).toBe('none');
+    expect(z.median).toBeNaN();
+    expect([...z.scores].every(Number.isNaN)).toBe(true);
+  });
+
+  it('modifiedZScores scores an infinite value NaN, like a missing one, and leaves it out of the median', () => {
+    const z = modifiedZScores([148, Number.POSITIVE_INFINITY, 150, 147, Number.NEGATIVE_INFINITY]);
+    expect(z.median).toBe(148);
+    expect(z.scores[1]).toBeNaN();
+    expect(z.scores[4]).toBeNaN();
+  });
+
+  // The floor is used only when the MAD is *below* it; at the floor the MAD itself scales.
+  it('modifiedZScores with the MAD exactly at the floor scales by the MAD', () => {
+    const z = modifiedZScores([1, 2, 3], 1);
+    expect(z.mad).toBe(1);
+    expect(z.scale).toBe('mad');
+    expect(z.scores[2]).toBeCloseTo(0.6745, 12);
+  });
+
+  it('modifiedZScores with a floor that is not finite throws, naming the floor', () => {
+    expect(() => modifiedZScores([1, 2, 3], Number.POSITIVE_INFINITY)).toThrow('modifiedZScores: the MAD floor must be a finite number ≥ 0');
+    expect(() => modifiedZScores([1, 2, 3], () => Number.NaN)).toThrow('modifiedZScores: the MAD floor must be a finite number ≥ 0');
   });
 
   it('modifiedZScores with missing values scores them NaN and skips them', () => {
