@@ -1,4 +1,5 @@
 import fc from 'fast-check';
+import { median, medianAbsoluteDeviation } from 'simple-statistics';
 import { GROUND_DISTANCE_LIMIT, robustGroundDistances } from '@/analysis/strays';
 
 /** Seeded normal pairs (mulberry32 + Box–Muller) with sd sx, sy and correlation rho. */
@@ -138,5 +139,74 @@ describe('robustGroundDistances', () => {
         });
       }),
     );
+  });
+});
+
+describe('robustGroundDistances against the published formulas', () => {
+  // Reference library: simple-statistics' median and MAD in the published formulas — scale
+  // 1.4826·MAD per axis, Gnanadesikan & Kettenring's r = (s(u)² − s(v)²)/(s(u)² + s(v)²) with u, v
+  // the sum and difference of the standardised axes (Biometrics 28, 1972), and the distance
+  // d² = (x² − 2r·x·y + y²)/(1 − r²).
+  it('robustGroundDistances on random groups agrees with the formulas over simple-statistics', () => {
+    const pts = fc.array(fc.tuple(fc.integer({ min: -3000, max: 3000 }), fc.integer({ min: -3000, max: 3000 })), { minLength: 5, maxLength: 30 });
+    fc.assert(
+      fc.property(pts, fc.integer({ min: -9, max: 9 }), (ps, tilt) => {
+        const x = ps.map((p) => p[0] / 100);
+        const y = ps.map((p, i) => 150 + p[1] / 100 + (tilt / 10) * x[i]);
+        const scale = (v: number[]) => 1.4826 * medianAbsoluteDeviation(v);
+        const sx = scale(x);
+        const sy = scale(y);
+        fc.pre(sx > 0 && sy > 0);
+        const zx = x.map((v) => (v - median(x)) / sx);
+        const zy = y.map((v) => (v - median(y)) / sy);
+        const su = scale(zx.map((v, i) => v + zy[i]));
+        const sv = scale(zx.map((v, i) => v - zy[i]));
+        fc.pre(su > 0 && sv > 0);
+        const r = Math.max(-0.99, Math.min(0.99, (su * su - sv * sv) / (su * su + sv * sv)));
+        const got = robustGroundDistances(x, y);
+        expect(got.scaleOffline).toBeCloseTo(sx, 9);
+        expect(got.scaleCarry).toBeCloseTo(sy, 9);
+        expect(got.correlation).toBeCloseTo(r, 9);
+        zx.forEach((a, i) => {
+          const b = zy[i];
+          expect(got.distances[i]).toBeCloseTo(Math.sqrt((a * a - 2 * r * a * b + b * b) / (1 - r * r)), 6);
+        });
+      }),
+    );
+  });
+
+  it('robustGroundDistances with a floor below the MAD keeps the scale 1.4826·MAD', () => {
+    const r = robustGroundDistances([-4, -2, 0, 2, 4], [140, 145, 150, 155, 160], { madFloorOfflineM: 1, madFloorCarryM: 1 });
+    expect(r.scaleOffline).toBeCloseTo(1.4826 * 2, 9);
+    expect(r.scaleCarry).toBeCloseTo(1.4826 * 5, 9);
+  });
+
+  it('robustGroundDistances with no spread along carry uses offline alone', () => {
+    const r = robustGroundDistances([-1, 0, 1, 0, 10], [150, 150, 150, 150, 150]);
+    expect(r.scaleCarry).toBe(0);
+    // offline: median 0, deviations 1, 0, 1, 0, 10 → MAD 1, scale 1.4826.
+    expect(r.distances[4]).toBeCloseTo(10 / 1.4826, 9);
+  });
+
+  it('robustGroundDistances of shots all on one spot with floors gives distance 0 and correlation 0', () => {
+    const r = robustGroundDistances([1, 1, 1, 1, 1], [150, 150, 150, 150, 150], { madFloorOfflineM: 1, madFloorCarryM: 2 });
+    expect(r.correlation).toBe(0);
+    expect([...r.distances]).toEqual([0, 0, 0, 0, 0]);
+  });
+
+  it('robustGroundDistances of columns of unequal length scores the shorter one’s pairs', () => {
+    const r = robustGroundDistances([-1, 0, 1, 0, 10, 99], [150, 151, 149, 150, 150]);
+    expect(r.distances).toHaveLength(5);
+    expect(r.centerOffline).toBe(0);
+  });
+
+  it('robustGroundDistances leaves a shot missing one value out of the centre and the scales', () => {
+    const full = robustGroundDistances([-1, 0, 1, 2, -2], [150, 151, 149, 152, 148]);
+    const holed = robustGroundDistances([-1, 0, 1, 2, -2, 500], [150, 151, 149, 152, 148, Number.NaN]);
+    const holed2 = robustGroundDistances([-1, 0, 1, 2, -2, Number.NaN], [150, 151, 149, 152, 148, 900]);
+    for (const h of [holed, holed2]) {
+      expect([h.centerOffline, h.centerCarry, h.scaleOffline, h.scaleCarry, h.correlation]).toEqual([full.centerOffline, full.centerCarry, full.scaleOffline, full.scaleCarry, full.correlation]);
+      expect(h.distances[5]).toBeNaN();
+    }
   });
 });
