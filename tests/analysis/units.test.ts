@@ -111,6 +111,8 @@ describe('findUnit', () => {
     expect(findUnit('Yds.')?.unit).toBe('yd');
     expect(findUnit('  MILES   PER  HOUR ')?.unit).toBe('mph');
     expect(findUnit('rev/min.')?.unit).toBe('rpm');
+    // Only a full stop at the end is dropped, never one inside the name.
+    expect(findUnit('ft./s')).toBeNull();
   });
 
   it('unitInfo of a known alias gives the unit; of an unknown one throws UNKNOWN_UNIT naming it', () => {
