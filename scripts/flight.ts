@@ -16,10 +16,7 @@ import {
 } from '@/analysis/flight';
 import type { ClubKind } from '@/analysis/clubs';
 
-// NIST SP 811 (2008), Appendix B: exact conversion factors.
-const MPS_PER_MPH = 0.44704;
-const M_PER_YARD = 0.9144;
-const M_PER_FOOT = 0.3048;
+import { FOOT_M as M_PER_FOOT, MPH_MPS as MPS_PER_MPH, YARD_M as M_PER_YARD } from '@/analysis/units';
 
 const HELP = `Ovalyard ball flight
 

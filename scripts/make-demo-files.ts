@@ -8,12 +8,10 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { simulateFlight } from '@/analysis/flight';
+import { FOOT_M as FT, MPH_MPS as MPH, YARD_M as YD } from '@/analysis/units';
 import { normalFrom, seededRandom } from '@/fixtures/seeded-random';
 
 const OUT = path.resolve(__dirname, '../fixtures/demo');
-const MPH = 0.44704;
-const YD = 0.9144;
-const FT = 0.3048;
 
 interface ClubPlan {
   club: string;

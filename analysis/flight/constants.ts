@@ -1,3 +1,5 @@
+import { RPM_RAD_PER_S } from '@/analysis/units';
+
 /**
  * Physical constants of the ball-flight model.
  * Ball limits: R&A / USGA Rules of Equipment (ball mass at most 45.93 g, diameter at least
@@ -20,7 +22,7 @@ export const BALL_AREA_M2 = (Math.PI * BALL_DIAMETER_M * BALL_DIAMETER_M) / 4;
 export const STANDARD_GRAVITY_MPS2 = 9.80665;
 
 /** Radians per second in one revolution per minute (NIST SP 811: rpm = π/30 rad/s). */
-export const RAD_PER_S_PER_RPM = Math.PI / 30;
+export const RAD_PER_S_PER_RPM = RPM_RAD_PER_S;
 
 /** Degrees to radians. */
 export const RAD_PER_DEG = Math.PI / 180;

@@ -1,8 +1,5 @@
 import { SHOT_FIELDS, type ShotField } from '@/analysis/fields';
-
-const YD = 0.9144; // NIST SP 811 (2008), Appendix B: 1 yd = 0.9144 m exactly
-const MPH = 0.44704; // NIST SP 811: 1 mph = 0.44704 m/s exactly
-const FT = 0.3048; // NIST SP 811: 1 ft = 0.3048 m exactly
+import { FOOT_M as FT, MPH_MPS as MPH, YARD_M as YD } from '@/analysis/units';
 
 /** The smallest difference a fitter cares about, per field, in canonical units. */
 export type FieldMargins = Readonly<Record<ShotField, number>>;

@@ -1,6 +1,5 @@
 import type { ClubKind } from '@/analysis/clubs';
-
-const YARD_M = 0.9144; // NIST SP 811 (2008), Appendix B: 1 yd = 0.9144 m exactly
+import { YARD_M } from '@/analysis/units';
 
 /**
  * Carry-gap rule of thumb between neighbouring clubs. Common practice, no source: full-swing

@@ -1,8 +1,7 @@
 import { meanVariance, sampleCovariance2 } from '@/analysis/statistics';
+import { YARD_M as YD } from '@/analysis/units';
 import { fairwayOdds } from './fairway-odds';
 import { greenOdds } from './green-odds';
-
-const YD = 0.9144; // NIST SP 811 (2008), Appendix B: 1 yd = 0.9144 m exactly
 
 /**
  * Default targets (common practice, no source): a 30 yd fairway and a green of 12 yd radius;

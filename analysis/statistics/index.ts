@@ -4,7 +4,7 @@ export { orderStatisticsInPlace, medianInPlace } from './order-statistics';
 export type { OrderStatistics } from './order-statistics';
 export { summarize, summarizeInPlace } from './summary';
 export type { FieldSummary } from './summary';
-export { robustSpreadInPlace } from './median-absolute-deviation';
+export { MAD_TO_SIGMA, MEAN_AD_TO_SIGMA, robustSpreadInPlace } from './median-absolute-deviation';
 export type { RobustSpread } from './median-absolute-deviation';
 export { sampleCovariance2 } from './covariance';
 export type { Covariance2 } from './covariance';

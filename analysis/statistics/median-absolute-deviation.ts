@@ -1,5 +1,14 @@
 import { medianInPlace } from './order-statistics';
 
+/** 1.4826 ≈ 1/Φ⁻¹(0.75): the MAD times this estimates σ for normal data. */
+export const MAD_TO_SIGMA = 1.4826;
+/**
+ * √(π/2) ≈ 1.253314: the mean absolute deviation times this estimates σ for normal data (the mean
+ * deviation of a normal distribution is σ·√(2/π); Geary, Biometrika 27, 1935). The fallback scale
+ * when the MAD is 0.
+ */
+export const MEAN_AD_TO_SIGMA = Math.sqrt(Math.PI / 2);
+
 /** Median, raw median absolute deviation and mean absolute deviation about the median. */
 export interface RobustSpread {
   median: number;

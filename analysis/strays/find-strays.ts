@@ -97,14 +97,23 @@ export const FAR_BELOW_SHARE: Readonly<Partial<Record<ScoredField, number>>> = {
 
 const MAD_FACTOR = 0.6745;
 
-/** Modified z of each shot for one field: against the others only in small groups; excluded shots never count in a centre or scale. */
-function fieldScores(values: ArrayLike<number>, excluded: Uint8Array, field: ScoredField): { z: Float64Array; median: Float64Array; mad: Float64Array; floored: Uint8Array } | null {
+/**
+ * Modified z of each shot for one field: against the others only in small groups; excluded shots
+ * never count in a centre or scale. `excluded` lists exclusion sets, most first: the first that
+ * leaves MIN_SHOTS_FOR_SCORE values is used (so the second pass of a three-shot group, which
+ * would leave two values once its mishit is set aside, scores as the first did).
+ */
+function fieldScores(values: ArrayLike<number>, excluded: readonly Uint8Array[], field: ScoredField): { z: Float64Array; median: Float64Array; mad: Float64Array; floored: Uint8Array } | null {
   const n = values.length;
   const basis = new Float64Array(n);
   let count = 0;
-  for (let i = 0; i < n; i++) {
-    basis[i] = excluded[i] === 1 ? Number.NaN : values[i];
-    if (Number.isFinite(basis[i])) count++;
+  for (const set of excluded) {
+    count = 0;
+    for (let i = 0; i < n; i++) {
+      basis[i] = set[i] === 1 ? Number.NaN : values[i];
+      if (Number.isFinite(basis[i])) count++;
+    }
+    if (count >= MIN_SHOTS_FOR_SCORE) break;
   }
   if (count < MIN_SHOTS_FOR_SCORE) return null;
   const z = new Float64Array(n).fill(Number.NaN);
@@ -144,6 +153,7 @@ function fieldScores(values: ArrayLike<number>, excluded: Uint8Array, field: Sco
  * groups, O(n) above.
  */
 function scoreStrikes(columns: Record<ScoredField, ArrayLike<number> | undefined>, misread: readonly number[], n: number): StrayFlag[][] {
+  const misreadOnly = Uint8Array.from(misread);
   let excluded = Uint8Array.from(misread);
   let result: StrayFlag[][] = [];
   const hasStrike = [columns.smashFactor, columns.ballSpeed].some((c) => c !== undefined && countFinite(c) >= MIN_SHOTS_FOR_SCORE);
@@ -154,7 +164,7 @@ function scoreStrikes(columns: Record<ScoredField, ArrayLike<number> | undefined
     const scores: Partial<Record<ScoredField, NonNullable<ReturnType<typeof fieldScores>>>> = {};
     for (const field of SCORED_FIELDS) {
       const values = columns[field];
-      const s = values ? fieldScores(values, excluded, field) : null;
+      const s = values ? fieldScores(values, pass === 0 ? [excluded] : [excluded, misreadOnly], field) : null;
       if (s) scores[field] = s;
     }
     // Per field, each shot's z on its worse side (lower for smash, ball speed and carry, either

@@ -1,4 +1,4 @@
-import { robustSpreadInPlace } from '@/analysis/statistics';
+import { MEAN_AD_TO_SIGMA, robustSpreadInPlace } from '@/analysis/statistics';
 
 /** Iglewicz & Hoaglin's cut-off: |M| above this marks a likely outlier. */
 export const MODIFIED_Z_LIMIT = 3.5;
@@ -6,11 +6,11 @@ export const MODIFIED_Z_LIMIT = 3.5;
 /** 0.6745 ≈ Φ⁻¹(0.75): makes MAD a normal-consistent scale in the modified z-score. */
 const MAD_FACTOR = 0.6745;
 /**
- * Used when MAD is 0: M = (x − median) / (1.253314 · mean absolute deviation); 1.253314 ≈ √(π/2)
- * makes the mean absolute deviation a normal-consistent scale. From memory: the convention of
- * IBM's statistics documentation for the modified z-score; no printed source at hand.
+ * Used when MAD is 0: M = (x − median) / (√(π/2) · mean absolute deviation); √(π/2) ≈ 1.253314
+ * makes the mean absolute deviation a normal-consistent scale (Geary, Biometrika 27, 1935). The
+ * fallback is IBM's (Cognos Analytics 11.1 documentation, "Modified z score").
  */
-const MEAN_AD_FACTOR = 1.253314;
+const MEAN_AD_FACTOR = MEAN_AD_TO_SIGMA;
 
 /** Modified z-scores of a list, with the median and scales used. */
 export interface ModifiedZScores {

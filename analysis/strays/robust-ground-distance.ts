@@ -1,9 +1,5 @@
-import { chiSquare2Quantile, robustSpreadInPlace } from '@/analysis/statistics';
+import { chiSquare2Quantile, MAD_TO_SIGMA, MEAN_AD_TO_SIGMA, robustSpreadInPlace } from '@/analysis/statistics';
 
-/** 1.4826 ≈ 1/Φ⁻¹(0.75): MAD times this estimates σ for normal data. */
-const MAD_TO_SIGMA = 1.4826;
-/** √(π/2): mean absolute deviation times this estimates σ (fallback when MAD is 0). */
-const MEAN_AD_TO_SIGMA = 1.253314;
 /** Keeps the robust correlation off ±1, so a line of shots still gives finite distances. */
 const MAX_CORRELATION = 0.99;
 

@@ -78,7 +78,7 @@ describe('npm run analyse', () => {
   });
 
   it('analyse --level 0.68 scales the oval by the χ² quantile ratio', () => {
-    // χ²₂ quantiles in closed form −2·ln(1 − p) (CHECKS.md): 0.68 → 2.278868566, 0.95 → 5.991464547.
+    // χ²₂ quantiles in closed form −2·ln(1 − p) (Abramowitz & Stegun, Handbook of Mathematical Functions, 1964, §26.4: for ν = 2, Q(χ²) = e^(−χ²/2)): 0.68 → 2.278868566, 0.95 → 5.991464547.
     const session = path.join(ROOT, 'fixtures/demo/nell-driver-and-7-iron.csv');
     const ovalOf = (args: string[]) => JSON.parse(run([session, '--json', '--all', ...args]).stdout).groups.find((g: { oval: unknown }) => g.oval).oval;
     const a = ovalOf([]);

@@ -40,11 +40,23 @@ describe('scripts/flight.ts', () => {
     expect(totalYd).toBeCloseTo(carryYd + rollYd, 0);
     expect(stdout).toMatch(/Apex height +\d+ ft/);
   });
+  // NIST SP 811 (2008), Appendix B.8: 1 mph = 0.44704 m/s, 1 yd = 0.9144 m, 1 ft = 0.3048 m
+  // exactly. The same launch typed in mph and in m/s must fly the same ball, and the imperial
+  // print must be the metric figures divided by those factors.
+  it('flight --units imperial reads 167 mph as 74.65568 m/s and prints carry in yards and apex in feet by the SP 811 factors', () => {
+    const si = JSON.parse(flight('--ball-speed', '74.65568', '--launch', '10.9', '--spin', '2686', '--json').stdout);
+    const mph = JSON.parse(flight('--ball-speed', '167', '--launch', '10.9', '--spin', '2686', '--units', 'imperial', '--json').stdout);
+    expect(mph.carry).toBeCloseTo(si.carry, 9);
+    const { stdout } = flight('--ball-speed', '167', '--launch', '10.9', '--spin', '2686', '--units', 'imperial');
+    expect(Number(/Carry +([\d.]+) yd/.exec(stdout)![1])).toBeCloseTo(si.carry / 0.9144, 1);
+    expect(Number(/Apex height +(\d+) ft/.exec(stdout)![1])).toBeCloseTo(si.apexHeight / 0.3048, 0);
+  });
   it('flight with air conditions at the ISO 2533 altitude uses the standard atmosphere density', () => {
     // ISO 2533: 1000 m → 1.11164 kg/m³ (dry; computed from the standard's troposphere formula).
     const { stdout } = flight('--ball-speed', '70', '--launch', '12', '--spin', '3000', '--altitude', '1000', '--json');
     expect(JSON.parse(stdout).airDensity).toBeCloseTo(1.11164, 3);
   });
+  // Firmness acts on the ground only (common practice, no source: firm ground rolls farther).
   it('flight with --firmness rolls farther on firm ground than on soft, the carry unchanged', () => {
     const soft = JSON.parse(flight('--ball-speed', '70', '--launch', '12', '--spin', '2600', '--firmness', 'soft', '--json').stdout);
     const firm = JSON.parse(flight('--ball-speed', '70', '--launch', '12', '--spin', '2600', '--firmness', 'firm', '--json').stdout);
@@ -55,6 +67,8 @@ describe('scripts/flight.ts', () => {
     const { stdout } = flight('--ball-speed', '167', '--launch', '10.9', '--spin', '2686', '--units', 'imperial', '--model', 'smits-smith-drag-lyu-lift', '--json');
     expect(JSON.parse(stdout).carry / 256.1 - 1).toBeLessThan(-0.05);
   });
+  // Wind direction is where the wind blows from (WMO, "Guide to Instruments and Methods of
+  // Observation", WMO-No. 8, ch. 5; from memory): from 90° (the right) it pushes the ball left.
   it('flight with a wind from the right lands the ball left', () => {
     const { stdout } = flight('--ball-speed', '55', '--launch', '16', '--spin', '6500', '--wind-speed', '6', '--wind-from', '90', '--json');
     expect(JSON.parse(stdout).offline).toBeLessThan(-1);

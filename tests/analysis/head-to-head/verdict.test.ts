@@ -18,6 +18,35 @@ describe('verdictOf', () => {
     expect(() => verdictOf([1, 2], 0)).toThrow(RangeError);
   });
 
+  // Schuirmann's two one-sided tests reject δ ≤ −margin and δ ≥ margin: the interval must lie
+  // strictly inside (−margin, margin). An interval excludes 0 only when 0 is outside it (a
+  // closed interval that ends at 0 holds it).
+  it('verdictOf with an interval ending exactly at ±margin is not equivalent', () => {
+    expect(verdictOf([-2, 1], 2)).toBe('unclear');
+    expect(verdictOf([-1, 2], 2)).toBe('unclear');
+    expect(verdictOf([0.5, 2], 2)).toBe('clear');
+    expect(verdictOf([-2, -0.5], 2)).toBe('clear');
+    expect(verdictOf([-1.999, 1.999], 2)).toBe('equivalent');
+  });
+  it('verdictOf with an interval ending exactly at 0 and past the margin is unclear', () => {
+    expect(verdictOf([0, 5], 2)).toBe('unclear');
+    expect(verdictOf([-5, 0], 2)).toBe('unclear');
+    expect(verdictOf([1e-9, 5], 2)).toBe('clear');
+  });
+  it('verdictOf reads an interval given high end first as the same interval', () => {
+    expect(verdictOf([5.1, 0.8], 2.7432)).toBe('clear');
+    expect(verdictOf([2, -1.2], 2.7432)).toBe('equivalent');
+    expect(verdictOf([12, -10], 2.7432)).toBe('unclear');
+  });
+  it('verdictOf with a margin or interval that is not a finite number throws, naming which', () => {
+    expect(() => verdictOf([1, 2], -1)).toThrow('verdictOf: the margin must be a positive number');
+    expect(() => verdictOf([1, 2], Number.POSITIVE_INFINITY)).toThrow('verdictOf: the margin must be a positive number');
+    expect(() => verdictOf([1, 2], Number.NaN)).toThrow('verdictOf: the margin must be a positive number');
+    expect(() => verdictOf([Number.NaN, 2], 1)).toThrow('verdictOf: the interval must be finite');
+    expect(() => verdictOf([1, Number.POSITIVE_INFINITY], 1)).toThrow('verdictOf: the interval must be finite');
+    expect(() => verdictOf([Number.NEGATIVE_INFINITY, 1], 1)).toThrow('verdictOf: the interval must be finite');
+  });
+
   // Property: the verdict always agrees with the interval and the margin.
   it('verdictOf always agrees with its interval and margin', () => {
     fc.assert(

@@ -69,7 +69,7 @@ describe('bay-file fixtures', () => {
       }
       for (const m of expected.missing ?? []) {
         const shot = result.shots.find((s) => s.row === m.row);
-        expect(shot).toBeDefined();
+        expect(shot?.row).toBe(m.row);
         expect(shot!.values).not.toHaveProperty(m.field);
       }
       for (const [row, fields] of Object.entries(expected.derived)) {

@@ -31,12 +31,10 @@ describe('importBayFile bad input', () => {
     expect(codeOf(() => importBayFile(text))).toBe(code);
   });
 
-  it('importBayFile of an unknown unit names the column', () => {
-    try {
-      importBayFile('Club,Carry (furlongs)\n7 Iron,0.75\n');
-    } catch (e) {
-      expect((e as ImportError).column).toBe('Carry (furlongs)');
-    }
+  it('importBayFile of an unknown unit throws UNKNOWN_UNIT naming the column', () => {
+    expect(() => importBayFile('Club,Carry (furlongs)\n7 Iron,0.75\n')).toThrow(
+      expect.objectContaining({ code: 'UNKNOWN_UNIT', column: 'Carry (furlongs)' }),
+    );
   });
 
   it('importBayFile of ragged rows rejects them with the row and the reason', () => {

@@ -43,11 +43,7 @@ describe('parseSide', () => {
     ['3.2 X', 'suffix-LR'],
   ])('parseSide of the unreadable "%s" in %s throws ImportError BAD_CELL', (cell, notation) => {
     expect(() => parseSide(cell, notation, '.')).toThrow(ImportError);
-    try {
-      parseSide(cell, notation, '.');
-    } catch (e) {
-      expect((e as ImportError).code).toBe('BAD_CELL');
-    }
+    expect(() => parseSide(cell, notation, '.')).toThrow(expect.objectContaining({ code: 'BAD_CELL' }));
   });
 
   it('parseSide of zero with a left mark gives positive zero', () => {

@@ -34,3 +34,20 @@ describe('ovalOutline', () => {
     expect(() => ovalOutline(groundOval(OFFLINE, CARRY), 2)).toThrow(RangeError);
   });
 });
+
+describe('ovalOutline at its boundary', () => {
+  const circle = { level: 0.95, centerOffline: 0, centerCarry: 100, semiMajor: 2, semiMinor: 2, angleDeg: 0, area: 4 * Math.PI };
+  // Three points at 0°, 120° and 240° of the parameter: the far end of the long axis first
+  // (carry 102), then cos 120° = −½ along the axis and sin 120° = √3/2 across.
+  it('ovalOutline with 3 segments gives the three points of the parametric form', () => {
+    const pts = ovalOutline(circle, 3);
+    expect(pts).toHaveLength(3);
+    expect(pts[0].carry).toBeCloseTo(102, 12);
+    expect(pts[1].carry).toBeCloseTo(99, 12);
+    expect(pts[1].offline).toBeCloseTo(Math.sqrt(3), 12);
+  });
+  it('ovalOutline with 2 or 3.5 segments throws that it needs 3 whole segments', () => {
+    expect(() => ovalOutline(circle, 2)).toThrow('ovalOutline needs at least 3 whole segments');
+    expect(() => ovalOutline(circle, 3.5)).toThrow('ovalOutline needs at least 3 whole segments');
+  });
+});

@@ -17,7 +17,7 @@ const point = fc.tuple(fc.integer({ min: -4000, max: 4000 }), fc.integer({ min: 
 const cloud = fc.array(point, { minLength: 4, maxLength: 40 });
 
 describe('groundOval', () => {
-  // Computed in CHECKS.md from the NIST e-Handbook covariance: eigenvalues 0.0277154 and 0.0042846,
+  // Computed by hand from the NIST/SEMATECH e-Handbook §6.5.4.1 covariance (2x2 eigen closed form): eigenvalues 0.0277154 and 0.0042846,
   // major axis 19.903° from the first axis, 95% χ² semi-axes 0.40750 and 0.16022.
   it('groundOval on the NIST e-Handbook example gives its 95% semi-axes and angle', () => {
     const oval = groundOval(X1, X2);
@@ -108,5 +108,52 @@ describe('ovalFromCovariance', () => {
   });
   it('ovalFromMoments with fewer than 3 shots throws', () => {
     expect(() => ovalFromMoments({ n: 2, meanX: 0, meanY: 0, xx: 1, xy: 0, yy: 1 }, 0.95, 'descriptive')).toThrow(RangeError);
+  });
+});
+
+describe('ovals at their boundaries', () => {
+  // χ²₂(0.95) = −2·ln 0.05 (Abramowitz & Stegun, Handbook of Mathematical Functions, 1964, §26.4).
+  const CHI2_95 = -2 * Math.log(0.05);
+
+  // Three shots, the fewest allowed: offline −1, 0, 1 and carry 150, 152, 150 have sample
+  // variances 1 (offline) and 4/3 (carry) and covariance 0 (by hand), so the 95% oval's semi-axes
+  // are √(χ²·4/3) along carry and √χ² across, its long axis on the carry line (angle 0).
+  it('groundOval of three shots gives the hand-computed semi-axes along the carry line', () => {
+    const oval = groundOval([-1, 0, 1], [150, 152, 150]);
+    expect(oval.centerCarry).toBeCloseTo(452 / 3, 12);
+    expect(oval.semiMajor).toBeCloseTo(Math.sqrt((CHI2_95 * 4) / 3), 9);
+    expect(oval.semiMinor).toBeCloseTo(Math.sqrt(CHI2_95), 9);
+    expect(oval.angleDeg).toBeCloseTo(0, 12);
+  });
+
+  it('groundOval of two shots throws that it needs at least three', () => {
+    expect(() => groundOval([-1, 1], [150, 152])).toThrow('groundOval needs at least 3 shots with offline and carry');
+    expect(() => groundOval([-1, 0, 1], [150, 152, 150], { n: 2 })).toThrow(RangeError);
+  });
+
+  it('groundOval of columns of unequal length uses the shorter one’s pairs', () => {
+    const oval = groundOval([-1, 0, 1, 40], [150, 152, 150]);
+    expect(oval.centerOffline).toBe(0);
+    expect(oval.semiMinor).toBeCloseTo(Math.sqrt(CHI2_95), 9);
+  });
+
+  it('ovalFromMoments of three shots works; of two throws that it needs three', () => {
+    const three = ovalFromMoments({ n: 3, meanX: 0, meanY: 150, xx: 1, xy: 0, yy: 4 }, 0.95, 'descriptive');
+    expect(three.semiMajor).toBeCloseTo(2 * Math.sqrt(CHI2_95), 9);
+    expect(() => ovalFromMoments({ n: 2, meanX: 0, meanY: 150, xx: 1, xy: 0, yy: 4 }, 0.95, 'descriptive')).toThrow('an oval needs at least 3 shots');
+  });
+
+  it('ovalFromCovariance with scale 0 gives a point; a negative scale throws', () => {
+    const point = ovalFromCovariance({ n: 5, meanX: 1, meanY: 150, xx: 9, xy: 0, yy: 4 }, 0, 0.95);
+    expect([point.semiMajor, point.semiMinor, point.area]).toEqual([0, 0, 0]);
+    expect(() => ovalFromCovariance({ n: 5, meanX: 1, meanY: 150, xx: 9, xy: 0, yy: 4 }, -1, 0.95)).toThrow('ovalFromCovariance: scale must be finite and ≥ 0');
+  });
+
+  // A circle has no long axis: its angle is 0 by convention (the eigenvector of equal
+  // eigenvalues is arbitrary), never 90.
+  it('ovalFromCovariance of equal variances and no covariance gives a circle at angle 0', () => {
+    const circle = ovalFromCovariance({ n: 5, meanX: 0, meanY: 150, xx: 4, xy: 0, yy: 4 }, CHI2_95, 0.95);
+    expect(circle.semiMajor).toBe(circle.semiMinor);
+    expect(circle.angleDeg).toBe(0);
   });
 });

@@ -108,7 +108,8 @@ describe('analyseSession', () => {
     const wide = analyseSession(session()).groups[1].oval!;
     const narrow = analyseSession(session(), { level: 0.68 }).groups[1].oval!;
     expect(narrow.level).toBe(0.68);
-    // Semi-axes scale with sqrt of the χ²₂ quantile: sqrt(2.278868566 / 5.991464547) (CHECKS.md values).
+    // Semi-axes scale with sqrt of the χ²₂ quantile: sqrt(2.278868566 / 5.991464547) (Abramowitz & Stegun, 1964, §26.4: −2·ln(1 − p)
+    // for ν = 2).
     expect(narrow.semiMajor / wide.semiMajor).toBeCloseTo(Math.sqrt(2.278868566 / 5.991464547), 8);
   });
 
@@ -118,7 +119,15 @@ describe('analyseSession', () => {
     expect(h.a).toEqual({ club: '7I', build: 'A' });
     expect(h.fields.carry!.diff).toBeLessThan(0);
     expect(h.fields.carry!.ci95[0]).toBeLessThan(h.fields.carry!.ci95[1]);
-    expect(h.fields.smashFactor).toBeDefined();
+    // Smash factor = ball speed / club speed (the trade's definition, common practice, no source),
+    // over build A's seven kept shots (row 5 is the thin strike); build B's are all 1.36.
+    const keptA = SEVEN_A.filter((_, i) => i !== 4);
+    const smashA = mean(keptA.map(([, , ball, club]) => ball / club));
+    expect(h.fields.smashFactor!.meanA).toBeCloseTo(smashA, 12);
+    expect(h.fields.smashFactor!.diff).toBeCloseTo(smashA - 1.36, 12);
+    // Welch–Satterthwaite with B's variance 0 leaves A's n − 1 = 6 degrees of freedom (Welch,
+    // Biometrika 34, 1947).
+    expect(h.fields.smashFactor!.df).toBeCloseTo(6, 9);
     expect(h.ovalAreaRatio).toBeGreaterThan(0);
   });
 

@@ -9,7 +9,8 @@ import {
 } from '@/analysis/statistics';
 
 describe('chiSquare2Quantile', () => {
-  // Closed form −2·ln(1 − p) (CHECKS.md): 0.5 → 1.386294361, 0.68 → 2.278868566, 0.9 → 4.605170186,
+  // Closed form −2·ln(1 − p) (Abramowitz & Stegun, Handbook of Mathematical Functions, 1964, §26.4:
+  // for ν = 2, Q(χ²) = e^(−χ²/2)): 0.5 → 1.386294361, 0.68 → 2.278868566, 0.9 → 4.605170186,
   // 0.95 → 5.991464547, 0.99 → 9.210340372.
   it.each([
     [0.5, 1.386294361],
@@ -28,7 +29,8 @@ describe('chiSquare2Quantile', () => {
     }
   });
 
-  // The oval at Mahalanobis distance 1 holds 1 − e^(−1/2) = 39.35% of a bivariate normal (CHECKS.md).
+  // The oval at Mahalanobis distance 1 holds 1 − e^(−1/2) = 39.35% of a bivariate normal (the
+  // same closed form at χ² = 1).
   it('chiSquare2Quantile at 1 − e^(−1/2) gives 1', () => {
     expect(chiSquare2Quantile(1 - Math.exp(-0.5))).toBeCloseTo(1, 12);
   });

@@ -1,6 +1,6 @@
 // NIST Statistical Reference Datasets, univariate summary statistics
 // (https://www.itl.nist.gov/div898/strd/univ/homepage.html). Data and certified values as
-// listed in /work/shared/CHECKS.md; the Michelso values are copied from the Go package
+// from those pages (NumAcc1, NumAcc3, NumAcc4, Michelso); the Michelso values are copied from the Go package
 // montanaflynn/stats, nist_test.go (commit 3b77151e), which reproduces the NIST file.
 
 export const NUM_ACC_1 = { data: [10000001, 10000003, 10000002], mean: 10000002, sd: 1 };

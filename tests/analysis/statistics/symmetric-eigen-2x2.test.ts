@@ -4,7 +4,8 @@ import { eigenSymmetric2x2 } from '@/analysis/statistics';
 
 describe('eigenSymmetric2x2', () => {
   // NIST/SEMATECH e-Handbook §6.5.4.1 covariance, first two variables [[0.025, 0.0075], [0.0075, 0.007]];
-  // eigenvalues 0.0277154 and 0.0042846, major axis 19.903° from the first axis (computed, CHECKS.md).
+  // eigenvalues 0.0277154 and 0.0042846, major axis 19.903° from the first axis (computed by hand from the
+  // 2x2 closed form λ = (a + c)/2 ± √(((a − c)/2)² + b²), θ = ½·atan2(2b, a − c)).
   it('eigenSymmetric2x2 on the NIST e-Handbook covariance block gives its eigenvalues and angle', () => {
     const e = eigenSymmetric2x2(0.025, 0.0075, 0.007);
     expect(e.major).toBeCloseTo(0.0277154, 7);

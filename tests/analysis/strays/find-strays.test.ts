@@ -110,6 +110,41 @@ describe('findStrays', () => {
 
   it('findStrays with four shots applies the one-field rules but not the ground rule', () => {
     expect(findStrays({ rows: [1, 2, 3, 4], carryM: [150, 151, 149, 150], offlineM: [0, 1, -1, 50] })).toEqual([]);
+    // The one-field rule fires at four shots: a carry a third short is a mishit; the shot 50 m
+    // right is not looked at by the ground rule (it needs five).
+    const strays = findStrays({ rows: [1, 2, 3, 4], carryM: [150, 151, 100, 150], offlineM: [0, 1, -1, 50] });
+    expect(strays.map((s) => [s.row, s.kind, s.flags.map((f) => f.rule)])).toEqual([[3, 'mishit', ['carry']]]);
+  });
+
+  // MIN_SHOTS_FOR_SCORE at its boundary: three carries are enough for the one-field rule. Median
+  // 150, MAD 1 under the carry floor max(1.5 m, 1.5% × 150) = 2.25 m, so by Iglewicz & Hoaglin's
+  // M = 0.6745·(x − median)/MAD (How to Detect and Handle Outliers, 1993) the short shot scores
+  // 0.6745 × (100 − 150)/2.25 = −14.99, far beyond 3.5.
+  it('findStrays with three shots and a carry a third short calls it a mishit on carry', () => {
+    const strays = findStrays({ rows: [1, 2, 3], carryM: [150, 151, 100] });
+    expect(strays.map((s) => [s.row, s.kind])).toEqual([[3, 'mishit']]);
+    const flag = strays[0].flags[0];
+    expect(flag).toMatchObject({ rule: 'carry', kind: 'mishit', value: 100, median: 150, floored: true });
+    expect(flag.kind === 'mishit' && flag.modifiedZ).toBeCloseTo((0.6745 * (100 - 150)) / 2.25, 9);
+  });
+
+  it('findStrays with two shots and a carry a third short applies no rule (below three values)', () => {
+    expect(findStrays({ rows: [1, 2], carryM: [150, 100] })).toEqual([]);
+    expect(findStrays({ rows: [1, 2, 3], carryM: [150, Number.NaN, 100] })).toEqual([]);
+  });
+
+  // Iglewicz & Hoaglin (How to Detect and Handle Outliers, 1993): a likely outlier has |M|
+  // *greater than* 3.5. Three launches: median 12°, MAD 2° (above the 1° floor), so
+  // M = 0.6745·(x − 12)/2; x = 22.378057820607857 gives M = 3.5 exactly in double precision, the
+  // next double above gives 3.500000000000001.
+  it('findStrays with a launch at modified z exactly 3.5 keeps it; just above is a mishit', () => {
+    const atLimit = 22.378057820607857;
+    expect((0.6745 * (atLimit - 12)) / 2).toBe(3.5);
+    expect(findStrays({ rows: [1, 2, 3], launchAngleDeg: [10, 12, atLimit] })).toEqual([]);
+    const above = 22.37805782060786;
+    expect((0.6745 * (above - 12)) / 2).toBeGreaterThan(3.5);
+    const strays = findStrays({ rows: [1, 2, 3], launchAngleDeg: [10, 12, above] });
+    expect(strays.map((s) => [s.row, s.kind, s.flags.map((f) => f.rule)])).toEqual([[3, 'mishit', ['launchAngle']]]);
   });
 
   it('findStrays with a column of the wrong length throws', () => {

@@ -32,14 +32,19 @@ describe('modifiedZScores', () => {
     );
   });
 
-  // MAD 0 → mean absolute deviation 0.8 about median 5; M(9) = 4/(1.253314·0.8) = 3.989 (computed; the
-  // 1.253314 fallback convention is from memory, see the source file).
-  it('modifiedZScores with MAD 0 scales by the mean absolute deviation instead', () => {
+  // MAD 0: IBM's documentation of the modified z score (Cognos Analytics 11.1, "Modified z score")
+  // divides by 1.253314·MeanAD instead, 1.253314 = √(π/2) being σ over the mean absolute
+  // deviation of a normal distribution (Geary, Biometrika 27, 1935: mean deviation/σ = √(2/π)).
+  // Here the mean absolute deviation about the median 5 is 0.8, so M(9) = 4/(√(π/2)·0.8) = 3.9894.
+  it('modifiedZScores with MAD 0 scales by √(π/2) × the mean absolute deviation instead', () => {
     const z = modifiedZScores([5, 5, 5, 5, 9]);
     expect(z.mad).toBe(0);
     expect(z.scale).toBe('meanAbsoluteDeviation');
-    expect(z.scores[4]).toBeCloseTo(4 / (1.253314 * 0.8), 9);
+    expect(z.scores[4]).toBeCloseTo(4 / (Math.sqrt(Math.PI / 2) * 0.8), 6);
+    expect(z.scores[4]).toBeCloseTo(3.9894, 4);
     expect(z.scores[0]).toBe(0);
+    // The MAD-equivalent scale: 0.6745 · √(π/2) · 0.8.
+    expect(z.madUsed).toBeCloseTo(0.6745 * Math.sqrt(Math.PI / 2) * 0.8, 6);
   });
 
   // With the floor, the MAD used is max(MAD, floor): here MAD 0, floor 0.01, so
@@ -70,6 +75,34 @@ describe('modifiedZScores', () => {
     const z = modifiedZScores([1.45, 1.45, 1.45]);
     expect(z.scale).toBe('none');
     expect([...z.scores]).toEqual([0, 0, 0]);
+    expect(z.madUsed).toBe(0);
+  });
+
+  it('modifiedZScores with no finite value gives NaN everywhere and no scale', () => {
+    const z = modifiedZScores([Number.NaN, Number.POSITIVE_INFINITY]);
+    expect(z.scale).toBe('none');
+    expect(z.median).toBeNaN();
+    expect([...z.scores].every(Number.isNaN)).toBe(true);
+  });
+
+  it('modifiedZScores scores an infinite value NaN, like a missing one, and leaves it out of the median', () => {
+    const z = modifiedZScores([148, Number.POSITIVE_INFINITY, 150, 147, Number.NEGATIVE_INFINITY]);
+    expect(z.median).toBe(148);
+    expect(z.scores[1]).toBeNaN();
+    expect(z.scores[4]).toBeNaN();
+  });
+
+  // The floor is used only when the MAD is *below* it; at the floor the MAD itself scales.
+  it('modifiedZScores with the MAD exactly at the floor scales by the MAD', () => {
+    const z = modifiedZScores([1, 2, 3], 1);
+    expect(z.mad).toBe(1);
+    expect(z.scale).toBe('mad');
+    expect(z.scores[2]).toBeCloseTo(0.6745, 12);
+  });
+
+  it('modifiedZScores with a floor that is not finite throws, naming the floor', () => {
+    expect(() => modifiedZScores([1, 2, 3], Number.POSITIVE_INFINITY)).toThrow('modifiedZScores: the MAD floor must be a finite number ≥ 0');
+    expect(() => modifiedZScores([1, 2, 3], () => Number.NaN)).toThrow('modifiedZScores: the MAD floor must be a finite number ≥ 0');
   });
 
   it('modifiedZScores with missing values scores them NaN and skips them', () => {

@@ -124,7 +124,12 @@ describe('ovalPlotGeometry', () => {
     expect(g.dots[0].y).toBeCloseTo(line150.px, 9);
     const metric = ovalPlotGeometry({ shots, groups: [], units: 'metric', widthPx: 390 });
     expect(metric.unit).toBe('m');
-    expect(metric.carryLines.find((l) => l.value === 140)).toBeDefined();
+    // 140 yd = 128.016 m (NIST SP 811, 2008, Appendix B: 1 yd = 0.9144 m): the metric dot of
+    // that shot sits 128.016 m up the same scale as the grid lines.
+    const line140 = metric.carryLines.find((l) => l.value === 140)!;
+    const line130 = metric.carryLines.find((l) => l.value === 130)!;
+    const pxPerM = (line130.px - line140.px) / 10;
+    expect(metric.dots[1].y).toBeCloseTo(line130.px + (130 - 128.016) * pxPerM, 6);
   });
 
   it('ovalPlotGeometry oval path starts with M, closes with Z and follows ovalOutline', () => {

@@ -91,7 +91,7 @@ describe('columnWithField', () => {
 
 describe('isSideTarget', () => {
   it('isSideTarget, every target, is true exactly for the left/right fields', () => {
-    // Left/right fields as PRODUCT.md's canonical data table signs them (+ is right).
+    // Left/right fields as analysis/fields.ts signs them (+ is right).
     for (const { value } of TARGET_OPTIONS) {
       expect(isSideTarget(value)).toBe((SIDE_FIELDS as ReadonlySet<string>).has(value));
     }

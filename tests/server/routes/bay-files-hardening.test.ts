@@ -220,7 +220,7 @@ describe('one rule for recipe names', () => {
 });
 
 describe('a database failure is not "not found"', () => {
-  it('with the database out of reach a bay file answers 503 UNAVAILABLE, not 404', async () => {
+  it('with the database out of reach a bay file, a fitting, its shots and builds answer 503 UNAVAILABLE, not 404', async () => {
     const agent = await signedInAgent(ctx.app, world.fitter.email);
     const list = await agent.get(`/api/fittings/${world.fitting.id}/bay-files`);
     expect(list.status).toBe(200);
@@ -232,6 +232,13 @@ describe('a database failure is not "not found"', () => {
     const res = await request(app).get(`/api/bay-files/00000000-0000-4000-8000-000000000000`).set('Authorization', `Bearer ${token}`);
     expect(res.status).toBe(503);
     expect(res.body.error.code).toBe('UNAVAILABLE');
+    // The same for a fitting, its shots and its builds (fittings.ts and shots.ts services).
+    for (const url of [`/api/fittings/${world.fitting.id}`, `/api/fittings/${world.fitting.id}/shots`, `/api/fittings/${world.fitting.id}/builds`]) {
+      const r = await request(app).get(url).set('Authorization', `Bearer ${token}`);
+      expect([url, r.status, r.body.error?.code]).toEqual([url, 503, 'UNAVAILABLE']);
+    }
+    const patch = await request(app).patch('/api/shots/00000000-0000-4000-8000-000000000000').set('Authorization', `Bearer ${token}`).send({ decision: 'drop' });
+    expect([patch.status, patch.body.error?.code]).toEqual([503, 'UNAVAILABLE']);
     await closeApp(app);
     await gone.close();
   });
