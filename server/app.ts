@@ -99,7 +99,7 @@ export function createApp({ sequelize, config, mailer, serveWeb = false, log, co
   api.use(['/players', '/fittings', '/team', '/recipes', '/bay-files', '/shots', '/builds', '/bag-clubs', '/spec-sheets', '/workshop-settings', '/shop'], authenticate(config));
   api.use('/players', playersRouter());
   api.use('/fittings', fittingsRouter());
-  api.use('/fittings', fittingCourseRouter(config, mail, limits));
+  api.use('/fittings', fittingCourseRouter(sequelize, config, mail, limits));
   api.use('/team', teamRouter());
   api.use('/recipes', recipesRouter());
   api.use('/shop', shopMarginsRouter());

@@ -1,4 +1,5 @@
 import { Router, type Request } from 'express';
+import type { Sequelize } from 'sequelize';
 import type { Config } from '../config';
 import { actorOf } from '../middleware/authenticate';
 import type { FittingLimits } from '../middleware/fitting-rate-limits';
@@ -9,11 +10,17 @@ import { getIntake, putIntake } from '../services/fitting-intake';
 import { listMessages, postMessage, readMessages } from '../services/fitting-messages';
 import { findVisibleFitting } from '../services/fittings';
 import type { Mailer } from '../services/mailer';
+import { plainWords } from '../services/plain-words';
 
-/** A fitting's course, intake and messages: /fittings/:id/course, /intake, /messages. */
-export function fittingCourseRouter(config: Config, mailer: Mailer, limits: FittingLimits): Router {
+/** A fitting's course, intake, messages and plain words: /fittings/:id/course, /intake, /messages, /plain-words. */
+export function fittingCourseRouter(sequelize: Sequelize, config: Config, mailer: Mailer, limits: FittingLimits): Router {
   const router = Router();
   const appUrl = (req: Request) => config.appUrl ?? `${req.protocol}://${req.get('host')}`;
+
+  router.get('/:id/plain-words', async (req, res) => {
+    const { id } = idParamsSchema.parse(req.params);
+    res.json(await plainWords(sequelize, actorOf(res), id));
+  });
 
   router.get('/:id/course', async (req, res) => {
     const { id } = idParamsSchema.parse(req.params);

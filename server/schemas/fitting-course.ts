@@ -134,3 +134,25 @@ export type MessageList = { messages: FittingMessage[]; unread: number };
 export const fittingRequestBodySchema = z.object({ note: optionalText(1000) });
 export const slugParamsSchema = z.object({ slug: z.string().trim().min(3).max(80).regex(/^[a-z0-9-]+$/, 'That link is not one of ours.') });
 export type RequestPage = { shopName: string; slug: string };
+
+/** One chosen build in a player's words (GET /api/fittings/:id/plain-words). */
+export interface PlainChoice {
+  club: string;
+  clubLabel: string;
+  buildLabel: string;
+  /** "The 65 g shaft: 6 yd longer and as straight" */
+  headline: string;
+  /** "than the 55 g shaft" */
+  against: string;
+  certainty: 'settled' | 'not-yet';
+  /** "About 7 in 10 of your next shots finish in a 33 yd fairway; …", or null without enough shots. */
+  odds: string | null;
+  /** How the ball curves and where it finishes, in the player's hand: "draw", "miss right". */
+  curve: string | null;
+  miss: string | null;
+  shots: number;
+}
+export interface PlainWords {
+  handedness: 'right' | 'left';
+  choices: PlainChoice[];
+}

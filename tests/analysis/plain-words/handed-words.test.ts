@@ -49,7 +49,8 @@ function mirrored(sample: BuildSample): BuildSample {
   return { ...sample, columns };
 }
 
-const value = (min: number, max: number) => fc.double({ min, max, noNaN: true, noDefaultInfinity: true });
+// Values to a tenth, as bay files give them.
+const value = (min: number, max: number) => fc.integer({ min: min * 10, max: max * 10 }).map((x) => x / 10);
 const shots = fc.array(fc.record({ carry: value(120, 180), offline: value(-30, 30), clubPath: value(-8, 8), faceAngle: value(-6, 6), spinAxis: value(-20, 20), ballSpeed: value(50, 60) }), { minLength: 4, maxLength: 14 });
 const sampleOf = (build: string, rows: { carry: number; offline: number; clubPath: number; faceAngle: number; spinAxis: number; ballSpeed: number }[]): BuildSample => ({
   club: '7I',
