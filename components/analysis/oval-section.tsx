@@ -23,10 +23,12 @@ type OvalSectionProps = {
   canDecide: boolean;
   onDecide: (shotId: number, decision: 'keep' | 'drop' | null) => void;
   deciding: boolean;
+  /** The stray list with its reasons (the player's view keeps it behind "how we worked this out"). */
+  showStrays?: boolean;
 };
 
 /** One club's dispersion: the plot, the spread in words per build, the strays with keep/drop. */
-export function OvalSection({ club, groups, shots, units, canDecide, onDecide, deciding }: OvalSectionProps) {
+export function OvalSection({ club, groups, shots, units, canDecide, onDecide, deciding, showStrays = true }: OvalSectionProps) {
   const [width, onLayout] = useWidth();
   const [showPrediction, setShowPrediction] = useState(false);
   const [selected, setSelected] = useState<string | null>(null);
@@ -78,7 +80,7 @@ export function OvalSection({ club, groups, shots, units, canDecide, onDecide, d
               {g.oval ? `${describeOvalSpread(ovalSpread(g.oval), distance)}.` : 'too few shots for an oval (3 or more with carry and offline).'}
             </AppText>
           ))}
-          <StrayList groups={clubGroups} shots={clubShots} canDecide={canDecide} onDecide={onDecide} deciding={deciding} />
+          {showStrays ? <StrayList groups={clubGroups} shots={clubShots} canDecide={canDecide} onDecide={onDecide} deciding={deciding} /> : null}
         </View>
       </View>
     </Card>
