@@ -42,7 +42,7 @@ export default function FittingScreen() {
   if (!isStaff(me.role)) {
     return (
       <Screen>
-        <Stack.Screen options={{ title: `Your fitting · ${formatDate(fitting.date)}` }} />
+        <Stack.Screen options={{ title: `${fitting.playerName} · ${formatDate(fitting.date)}` }} />
         <PlayerFittingView fitting={fitting} />
       </Screen>
     );
