@@ -48,6 +48,7 @@ export function IntakeForm({ unit, intake, player, busy, error, onSubmit }: Inta
       <AppText variant="caption" tone="muted">
         Sending updates your profile with these measures; your fitter is told the intake is in.
       </AppText>
+      {Object.keys(errors).length > 0 ? <Notice tone="danger">{`Not sent yet: ${Object.values(errors).join(' ')}`}</Notice> : null}
       <Button title={intake ? 'Send the changes' : 'Send the intake'} onPress={submit} busy={busy} />
     </View>
   );

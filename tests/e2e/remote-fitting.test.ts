@@ -49,7 +49,7 @@ describe('a remote fitting in the browser', () => {
     // the bag: one club added with the bag editor
     await phone.getByRole('button', { name: 'Your bag' }).click();
     await phone.getByRole('button', { name: 'Add a club' }).click();
-    await phone.getByLabel('Club').selectOption('5W');
+    await phone.getByLabel('Club', { exact: true }).selectOption('5W');
     await phone.getByLabel(/Carry, entered/).fill('185');
     await phone.getByRole('button', { name: 'Save' }).click();
     await phone.waitForURL((u) => !u.pathname.endsWith('/new'), { timeout: 30_000 });
@@ -84,7 +84,7 @@ describe('a remote fitting in the browser', () => {
     // the player reads plain words, no statistics, and accepts
     await phone.goto(`${demo.url}/fittings/${fittingId}`);
     await phone.getByRole('heading', { name: 'Your builds' }).waitFor({ timeout: 30_000 });
-    await phone.getByText(/^Steel 105 S: /).waitFor({ timeout: 30_000 });
+    await phone.getByText(/^Steel 105 S: /).first().waitFor({ timeout: 30_000 });
     await phone.getByRole('heading', { name: 'Where your shots land' }).waitFor({ timeout: 30_000 });
     const words = await phone.locator('body').innerText();
     expect(words).not.toMatch(/p = |p=|Welch|modified z/);
