@@ -95,18 +95,22 @@ describe('a remote fitting in the browser', () => {
     // a message from the player; the fitter sees it unread, reads it and answers
     await phone.goto(`${demo.url}/fittings/${fittingId}/messages`);
     await phone.getByLabel('Your message').fill('<b>Is</b> the steel shaft too heavy for winter?');
+    const posted = phone.waitForResponse((r) => r.url().endsWith('/messages') && r.request().method() === 'POST');
     await phone.getByRole('button', { name: 'Send', exact: true }).click();
+    expect((await posted).status()).toBe(201); // the e-mail goes before the answer
     await phone.getByText('<b>Is</b> the steel shaft too heavy for winter?').waitFor({ timeout: 30_000 });
-    expect(demo.mail.some((m) => m.to === FITTER && m.text.includes('too heavy for winter'))).toBe(true);
+    expect(demo.mail.filter((m) => m.text.includes('too heavy for winter')).map((m) => m.to)).toEqual([FITTER]);
 
     await desk.goto(`${demo.url}/fittings`);
     await desk.getByText('1 unread message').first().waitFor({ timeout: 30_000 });
     await desk.goto(`${demo.url}/fittings/${fittingId}/messages`);
     await desk.getByText('<b>Is</b> the steel shaft too heavy for winter?').waitFor({ timeout: 30_000 });
     await desk.getByLabel('Your message').fill('No: it suits your speed. We build it this week.');
+    const replied = desk.waitForResponse((r) => r.url().endsWith('/messages') && r.request().method() === 'POST');
     await desk.getByRole('button', { name: 'Send', exact: true }).click();
+    expect((await replied).status()).toBe(201);
     await desk.getByText('No: it suits your speed. We build it this week.').waitFor({ timeout: 30_000 });
-    expect(demo.mail.some((m) => m.to === PLAYER && m.text.includes('suits your speed'))).toBe(true);
+    expect(demo.mail.filter((m) => m.text.includes('suits your speed')).map((m) => m.to)).toEqual([PLAYER]);
     await desk.goto(`${demo.url}/fittings/${fittingId}`);
     await desk.getByRole('button', { name: 'Mark “Built”' }).click();
     await desk.getByText('Built: mark it delivered when the player has the clubs.').waitFor({ timeout: 30_000 });
