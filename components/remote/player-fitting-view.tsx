@@ -46,7 +46,7 @@ export function PlayerFittingView({ fitting }: PlayerFittingViewProps) {
         {me.playerId ? <Button variant="secondary" compact title="Your bag and ladder" onPress={() => router.push({ pathname: '/players/[id]/bag', params: { id: me.playerId! } })} /> : null}
         {fitting.remote ? <Button variant="secondary" compact title="Send a launch-monitor file" onPress={() => router.push({ pathname: '/fittings/[id]/import', params: { id: fitting.id } })} /> : null}
       </View>
-      {fitting.shotCount > 0 ? <PlayerShots fitting={fitting} units={me.units} /> : null}
+      {fitting.shotCount > 0 ? <PlayerShots fitting={fitting} units={me.units} hand={words.data?.handedness} /> : null}
     </View>
   );
 }

@@ -9,6 +9,7 @@ import { analysisShots } from '../analysis/plot-shots';
 import { StrayList } from '../analysis/stray-list';
 import { useFittingAnalysisQuery } from '../queries/analysis';
 import type { UnitSystem } from '@/analysis/units';
+import type { Hand } from '@/analysis/plain-words/handed-words';
 import { space } from '../theme';
 import { AppText } from '../ui/app-text';
 import { Button } from '../ui/button';
@@ -16,7 +17,7 @@ import { ErrorState } from '../ui/error-state';
 import { LoadingState } from '../ui/loading-state';
 import { Section } from '../ui/section';
 
-type PlayerShotsProps = { fitting: Fitting; units: UnitSystem };
+type PlayerShotsProps = { fitting: Fitting; units: UnitSystem; hand?: Hand };
 
 const noDecision = () => {};
 
@@ -24,7 +25,7 @@ const noDecision = () => {};
  * The player's shots per club: their ovals and on-target odds in words; the statistics (strays
  * and their reasons, the methods) only once they open "how we worked this out".
  */
-export function PlayerShots({ fitting, units }: PlayerShotsProps) {
+export function PlayerShots({ fitting, units, hand }: PlayerShotsProps) {
   const query = useFittingAnalysisQuery(fitting.id, { level: 0.95, includeStrays: false, compare: null, to: null, odds: null });
   const [club, setClub] = useState<string | null>(null);
   const [how, setHow] = useState(false);
@@ -39,7 +40,7 @@ export function PlayerShots({ fitting, units }: PlayerShotsProps) {
   return (
     <Section title="Where your shots land">
       <ChipRow label="Club" value={current} options={clubs.map((c) => ({ value: c, label: clubInfo(c)?.label ?? c }))} onChange={setClub} />
-      <OvalSection club={current} groups={query.data.analysis.groups} shots={shots} units={units} canDecide={false} deciding={false} onDecide={noDecision} showStrays={false} />
+      <OvalSection club={current} groups={query.data.analysis.groups} shots={shots} units={units} canDecide={false} deciding={false} onDecide={noDecision} showStrays={false} hand={hand} />
       {groups.map((g) => {
         const o = g.odds;
         if (o.fairway.p === null || o.green.p === null) return null;
