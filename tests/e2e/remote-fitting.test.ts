@@ -38,7 +38,7 @@ describe('a remote fitting in the browser', () => {
     await phone.getByText('Measuring wrist to floor').waitFor({ timeout: 30_000 });
     await phone.getByLabel('Height').fill('300'); // inches: the demo player reads imperial units
     await phone.getByRole('button', { name: 'Send the intake' }).click();
-    await phone.getByText(/over 230 cm/).waitFor({ timeout: 10_000 });
+    await phone.getByRole('alert').filter({ hasText: /^A height over 230 cm/ }).first().waitFor({ timeout: 10_000 }); // under the field itself
     await phone.getByLabel('Height').fill('66');
     await phone.getByLabel('Wrist to floor').fill('32');
     await phone.getByLabel('How the ball flies now').fill('High, curving right');
