@@ -14,6 +14,9 @@ import { bayFilesRouter } from './routes/bay-files';
 import { chosenBuildsRouter } from './routes/chosen-builds';
 import { demoRouter } from './routes/demo';
 import { fittingsRouter } from './routes/fittings';
+import { fittingCourseRouter } from './routes/fitting-course';
+import { fittingRequestsRouter } from './routes/fitting-requests';
+import { createFittingLimits, type FittingLimits } from './middleware/fitting-rate-limits';
 import { healthRouter } from './routes/health';
 import { playersRouter } from './routes/players';
 import { recipesRouter } from './routes/recipes';
@@ -42,6 +45,8 @@ export interface AppDeps {
   importPool?: ImportPool;
   /** Rate limiters; by default kept in this database's rate_limits table. */
   rateLimits?: RateLimits;
+  /** Limits of messages and fitting requests; by default in the rate_limits table. */
+  fittingLimits?: FittingLimits;
 }
 
 const pools = new WeakMap<Express, ImportPool>();
@@ -65,7 +70,7 @@ function staticCacheHeaders(res: express.Response, filePath: string): void {
 }
 
 /** Builds the Express app; listening is the caller's business (server/index.ts, tests). */
-export function createApp({ sequelize, config, mailer, serveWeb = false, log, commitHooks, importPool, rateLimits }: AppDeps): Express {
+export function createApp({ sequelize, config, mailer, serveWeb = false, log, commitHooks, importPool, rateLimits, fittingLimits }: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   // One proxy in front (see TRUST_PROXY in the README for the risk when clients can bypass it).
@@ -88,9 +93,13 @@ export function createApp({ sequelize, config, mailer, serveWeb = false, log, co
   api.use('/demo', demoRouter());
   api.use(authRouter(config, mail, rateLimits ?? createRateLimits(sequelize, config)));
   // Everything below needs a signed-in user; each service checks role and shop again.
+  // The public request page answers anyone; asking for a fitting there needs a sign-in (the router checks).
+  const limits = fittingLimits ?? createFittingLimits(sequelize);
+  api.use(fittingRequestsRouter(config, mail, limits));
   api.use(['/players', '/fittings', '/team', '/recipes', '/bay-files', '/shots', '/builds', '/bag-clubs', '/spec-sheets', '/workshop-settings', '/shop'], authenticate(config));
   api.use('/players', playersRouter());
   api.use('/fittings', fittingsRouter());
+  api.use('/fittings', fittingCourseRouter(sequelize, config, mail, limits));
   api.use('/team', teamRouter());
   api.use('/recipes', recipesRouter());
   api.use('/shop', shopMarginsRouter());

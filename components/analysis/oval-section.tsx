@@ -14,6 +14,7 @@ import { formatField, formatSide } from '../format-field';
 import type { AnalysisShot } from './plot-shots';
 import { StrayList } from './stray-list';
 import { useWidth } from './use-width';
+import { curveWord, missWord, type Hand } from '@/analysis/plain-words/handed-words';
 
 type OvalSectionProps = {
   club: string;
@@ -23,10 +24,14 @@ type OvalSectionProps = {
   canDecide: boolean;
   onDecide: (shotId: number, decision: 'keep' | 'drop' | null) => void;
   deciding: boolean;
+  /** The stray list with its reasons (the player's view keeps it behind "how we worked this out"). */
+  showStrays?: boolean;
+  /** The player's hand: each build's curve and miss in the words that hand uses (draw, fade…). */
+  hand?: Hand;
 };
 
 /** One club's dispersion: the plot, the spread in words per build, the strays with keep/drop. */
-export function OvalSection({ club, groups, shots, units, canDecide, onDecide, deciding }: OvalSectionProps) {
+export function OvalSection({ club, groups, shots, units, canDecide, onDecide, deciding, showStrays = true, hand }: OvalSectionProps) {
   const [width, onLayout] = useWidth();
   const [showPrediction, setShowPrediction] = useState(false);
   const [selected, setSelected] = useState<string | null>(null);
@@ -76,13 +81,22 @@ export function OvalSection({ club, groups, shots, units, canDecide, onDecide, d
             <AppText key={g.build ?? ''} variant="caption" tone="muted">
               <AppText variant="caption" style={styles.strong}>{`${g.build ?? clubInfo(club)?.label ?? club}: `}</AppText>
               {g.oval ? `${describeOvalSpread(ovalSpread(g.oval), distance)}.` : 'too few shots for an oval (3 or more with carry and offline).'}
+              {hand ? flightWords(g, hand) : ''}
             </AppText>
           ))}
-          <StrayList groups={clubGroups} shots={clubShots} canDecide={canDecide} onDecide={onDecide} deciding={deciding} />
+          {showStrays ? <StrayList groups={clubGroups} shots={clubShots} canDecide={canDecide} onDecide={onDecide} deciding={deciding} /> : null}
         </View>
       </View>
     </Card>
   );
+}
+
+/** " Curves: draw; finishes: miss right." for a build's mean spin axis and offline, in the player's hand's words. */
+function flightWords(g: GroupAnalysis, hand: Hand): string {
+  const axis = g.fields.spinAxis?.mean;
+  const offline = g.fields.offline?.mean;
+  const parts = [axis === undefined ? null : `curves: ${curveWord(axis, hand)}`, offline === undefined ? null : `finishes: ${missWord(offline)}`].filter(Boolean);
+  return parts.length ? ` ${parts.join('; ')} (${hand}-handed words).` : '';
 }
 
 function describeShot(s: AnalysisShot, units: UnitSystem): string {

@@ -29,6 +29,8 @@ export function BagView({ playerId }: BagViewProps) {
   const me = useMe();
   const router = useRouter();
   const staff = isStaff(me.role);
+  // The player keeps their own bag too (a remote fitting's intake starts from it).
+  const mayEdit = staff || me.playerId === playerId;
   const [on, setOn] = useState<string | null>(null);
   const query = useBagQuery(playerId, on);
   const [width, onLayout] = useWidth();
@@ -45,10 +47,10 @@ export function BagView({ playerId }: BagViewProps) {
       {on ? <Notice tone="info">{`The bag as recorded at the end of ${formatDate(on)}. Carries are today’s figures.`}</Notice> : null}
       <Section
         title={`Clubs (${inBag.length})`}
-        action={staff && !on ? <Button title="Add a club" compact onPress={() => router.push({ pathname: '/players/[id]/bag-clubs/new', params: { id: playerId } })} /> : null}
+        action={mayEdit && !on ? <Button title="Add a club" compact onPress={() => router.push({ pathname: '/players/[id]/bag-clubs/new', params: { id: playerId } })} /> : null}
       >
         {inBag.length === 0 ? (
-          <EmptyState title="No clubs yet" message={staff ? 'Add the clubs the player carries, or confirm chosen builds from a fitting.' : 'Your fitter records your clubs here.'} />
+          <EmptyState title="No clubs yet" message={staff ? 'Add the clubs the player carries, or confirm chosen builds from a fitting.' : 'Add the clubs you carry, or your fitter records them here.'} />
         ) : (
           <Card>
             {inBag.map((c) => (

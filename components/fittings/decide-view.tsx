@@ -12,6 +12,7 @@ import { OvalSection } from '../analysis/oval-section';
 import { analysisShots } from '../analysis/plot-shots';
 import { errorMessage } from '../api-client';
 import { useFittingAnalysisQuery, useShotDecisionMutation, type AnalysisParams } from '../queries/analysis';
+import { usePlayerQuery } from '../queries/players';
 import { isStaff } from '../session/permissions';
 import { useMe } from '../session/session-provider';
 import { space } from '../theme';
@@ -36,6 +37,7 @@ export function DecideView({ fitting, state }: DecideViewProps) {
   const query = useFittingAnalysisQuery(fitting.id, base);
   const measured = useFittingAnalysisQuery(fitting.id, { ...base, to: null }, { enabled: state.to !== null });
   const decide = useShotDecisionMutation(fitting.id);
+  const player = usePlayerQuery(fitting.playerId, { enabled: isStaff(me.role) });
   const data = query.data;
   const clubs = useMemo(() => [...new Set(data?.analysis.groups.map((g) => g.club) ?? [])], [data]);
   const club = state.club && clubs.includes(state.club) ? state.club : (clubs[0] ?? null);
@@ -75,6 +77,7 @@ export function DecideView({ fitting, state }: DecideViewProps) {
             canDecide={isStaff(me.role)}
             deciding={decide.isPending}
             onDecide={(shotId, decision) => decide.mutate({ shotId, decision })}
+            hand={player.data?.handedness}
           />
           {decide.error ? <AppText tone="danger">{errorMessage(decide.error)}</AppText> : null}
           <SwitchField label="Count strays" hint="Off: misreads and mishits are left out of the figures; shots only for review stay in." value={state.includeStrays} onChange={state.setIncludeStrays} />

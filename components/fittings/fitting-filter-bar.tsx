@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import type { FittingSort } from '@/server/schemas';
+import { COURSE_STEP_WORDS, COURSE_STEPS, type CourseStep, type FittingSort } from '@/server/schemas';
 import { Button } from '../ui/button';
 import { DateField } from '../ui/date-field';
 import { FormRow } from '../ui/form-row';
@@ -8,9 +8,11 @@ import { TextField } from '../ui/text-field';
 import { space } from '../theme';
 
 /** What the fittings list is searched, filtered and sorted by, as the inputs show it. */
-export type FittingFilterText = { q: string; from: string; to: string; sort: FittingSort };
+export type FittingFilterText = { q: string; from: string; to: string; sort: FittingSort; step: CourseStep | 'any' };
 
-export const NO_FITTING_FILTERS: FittingFilterText = { q: '', from: '', to: '', sort: 'date-desc' };
+export const NO_FITTING_FILTERS: FittingFilterText = { q: '', from: '', to: '', sort: 'date-desc', step: 'any' };
+
+const STEPS: readonly { value: CourseStep | 'any'; label: string }[] = [{ value: 'any', label: 'Any step' }, ...COURSE_STEPS.map((s) => ({ value: s, label: COURSE_STEP_WORDS[s] }))];
 
 const SORTS: readonly { value: FittingSort; label: string }[] = [
   { value: 'date-desc', label: 'Newest first' },
@@ -20,7 +22,7 @@ const SORTS: readonly { value: FittingSort; label: string }[] = [
 ];
 
 /** Whether anything narrows the list (the order alone does not). */
-export const hasFittingFilters = (f: FittingFilterText): boolean => f.q.trim() !== '' || f.from !== '' || f.to !== '';
+export const hasFittingFilters = (f: FittingFilterText): boolean => f.q.trim() !== '' || f.from !== '' || f.to !== '' || f.step !== 'any';
 
 type FittingFilterBarProps = { value: FittingFilterText; onChange: (next: FittingFilterText) => void };
 
@@ -44,7 +46,10 @@ export function FittingFilterBar({ value, onChange }: FittingFilterBarProps) {
           <DateField label="From" value={value.from} onChange={set('from')} max={value.to || undefined} />
           <DateField label="To" value={value.to} onChange={set('to')} min={value.from || undefined} />
         </FormRow>
-        <SelectField label="Sort" value={value.sort} options={SORTS} onChange={set('sort')} />
+        <FormRow basisPx={130}>
+          <SelectField label="Step" value={value.step} options={STEPS} onChange={set('step')} />
+          <SelectField label="Sort" value={value.sort} options={SORTS} onChange={set('sort')} />
+        </FormRow>
       </FormRow>
       {hasFittingFilters(value) ? (
         <Button title="Clear the filters" variant="quiet" compact onPress={() => onChange({ ...NO_FITTING_FILTERS, sort: value.sort })} />

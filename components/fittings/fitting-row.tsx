@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import type { Fitting } from '@/server/schemas';
+import { COURSE_STEP_WORDS, type Fitting } from '@/server/schemas';
 import { formatDate, formatVenue, plural } from '../format';
 import { AppText } from '../ui/app-text';
 import { Card } from '../ui/card';
@@ -7,7 +7,7 @@ import { space } from '../theme';
 
 type FittingRowProps = { fitting: Fitting; onPress: () => void; showPlayer?: boolean };
 
-/** One fitting in a list: date, player, fitter, venue, shot count. */
+/** One fitting in a list: date, player, fitter, venue, shot count, its step and unread messages. */
 export function FittingRow({ fitting, onPress, showPlayer = true }: FittingRowProps) {
   const title = showPlayer ? fitting.playerName : formatVenue(fitting.venue);
   return (
@@ -26,10 +26,16 @@ export function FittingRow({ fitting, onPress, showPlayer = true }: FittingRowPr
           fitting.fitterName ? `with ${fitting.fitterName}` : 'no fitter set',
           plural(fitting.shotCount, 'shot'),
           fitting.remote ? 'remote' : null,
+          COURSE_STEP_WORDS[fitting.courseStep],
         ]
           .filter(Boolean)
           .join(' · ')}
       </AppText>
+      {fitting.unreadMessages > 0 ? (
+        <AppText variant="label" tone="accent">
+          {plural(fitting.unreadMessages, 'unread message')}
+        </AppText>
+      ) : null}
     </Card>
   );
 }

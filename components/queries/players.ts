@@ -21,8 +21,8 @@ export function usePlayersQuery(f: PlayerFilters) {
   return useQuery(playersQuery(f));
 }
 
-export function usePlayerQuery(id: string) {
-  return useQuery(playerQuery(id));
+export function usePlayerQuery(id: string, options: { enabled?: boolean } = {}) {
+  return useQuery({ ...playerQuery(id), enabled: (options.enabled ?? true) && id !== '' });
 }
 
 export function useCreatePlayerMutation() {

@@ -24,7 +24,7 @@ interface DriverConnection {
  * The store reaches MariaDB through Sequelize's own pool, with the callback API and `??`
  * identifier placeholders it expects (the mariadb driver has promises and `?` only).
  */
-function storePool(sequelize: Sequelize) {
+export function storePool(sequelize: Sequelize) {
   const manager = (sequelize as unknown as { connectionManager: { getConnection(): Promise<DriverConnection>; releaseConnection(c: DriverConnection): Promise<void> } }).connectionManager;
   const expand = (sql: string, values: unknown[]): [string, unknown[]] => {
     const out: unknown[] = [];

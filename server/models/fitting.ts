@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import type { CourseStep } from '../schemas';
 import type { Player } from './player';
 import type { Shop } from './shop';
 import type { User } from './user';
@@ -19,6 +20,8 @@ export class Fitting extends Model<InferAttributes<Fitting>, InferCreationAttrib
   declare remote: CreationOptional<boolean>;
   /** Raised with every change the analysis depends on (server/services/fitting-revision.ts). */
   declare revision: CreationOptional<number>;
+  /** Where the fitting stands (migration 0010; server/services/fitting-course.ts moves it). */
+  declare courseStep: CreationOptional<CourseStep>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -39,6 +42,11 @@ export class Fitting extends Model<InferAttributes<Fitting>, InferCreationAttrib
         notes: { type: DataTypes.TEXT, allowNull: true },
         remote: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         revision: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
+        courseStep: {
+          type: DataTypes.ENUM('requested', 'intake-done', 'in-progress', 'recommendation-sent', 'accepted', 'built', 'delivered'),
+          allowNull: false,
+          defaultValue: 'in-progress',
+        },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -5,6 +5,7 @@ import { BayFile } from './bay-file';
 import { Build } from './build';
 import { ChosenBuild, ChosenBuildConfirmation, ChosenTakeOut } from './chosen-build';
 import { Fitting } from './fitting';
+import { FittingCourseStep, FittingIntake, FittingMessageRead, FittingMessageRecord, initRemoteFittingModels, ShopRequestLink } from './fitting-course';
 import { PasswordReset } from './password-reset';
 import { Player } from './player';
 import { Recipe } from './recipe';
@@ -16,6 +17,7 @@ import { User } from './user';
 import { WorkshopSettingsRecord } from './workshop-settings';
 
 export { BayFile, Build, Fitting, PasswordReset, Player, Recipe, Session, Shop, ShopMargins, User };
+export { FittingCourseStep, FittingIntake, FittingMessageRead, FittingMessageRecord, ShopRequestLink };
 export { BagClub, BagClubHistory, ChosenBuild, ChosenBuildConfirmation, ChosenTakeOut, SpecSheetRecord, WorkshopSettingsRecord };
 
 /** Registers every model and association on one Sequelize instance. */
@@ -31,6 +33,7 @@ export function initModels(sequelize: Sequelize): void {
   initBagModels(sequelize);
   ShopMargins.initModel(sequelize);
   Session.initModel(sequelize);
+  initRemoteFittingModels(sequelize);
 
   Shop.hasMany(User, { foreignKey: 'shopId' });
   User.belongsTo(Shop, { foreignKey: 'shopId', as: 'shop' });

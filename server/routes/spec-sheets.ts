@@ -35,7 +35,7 @@ export function specSheetsRouter(sequelize: Sequelize, config: Config, mailer: M
   });
   router.post('/spec-sheets/:id/accept', async (req, res) => {
     const { id } = idParamsSchema.parse(req.params);
-    res.json(await acceptSpecSheet(actorOf(res), id));
+    res.json(await acceptSpecSheet(actorOf(res), id, { mailer, appUrl: appUrl(req) }));
   });
   return router;
 }

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { optionalText } from './common';
+import { courseStepSchema } from './fitting-course';
 
 export const venueSchema = z.enum(['indoor', 'outdoor']);
 /** Ground firmness of a fitting (ball-flight model: roll and total). */
@@ -50,6 +51,10 @@ export const fittingSchema = z.object({
   notes: z.string().nullable(),
   remote: z.boolean(),
   shotCount: z.number(),
+  /** Where the fitting stands (its course). */
+  courseStep: courseStepSchema,
+  /** Messages on it the signed-in person has not read. */
+  unreadMessages: z.number(),
   createdAt: z.string(),
   updatedAt: z.string(),
 });
@@ -70,6 +75,8 @@ export const fittingListQuerySchema = z
     from: z.iso.date({ message: 'From is a date as YYYY-MM-DD.' }).optional(),
     to: z.iso.date({ message: 'To is a date as YYYY-MM-DD.' }).optional(),
     sort: fittingSortSchema.default('date-desc'),
+    /** Only fittings at this step of their course. */
+    step: courseStepSchema.optional(),
   })
   .refine((f) => !f.from || !f.to || f.from <= f.to, { path: ['to'], message: 'To is on or after From.' });
 /** What a list asks for (sort optional: newest first). */

@@ -124,9 +124,8 @@ type BagClubUpdate = z.output<typeof bagClubUpdateSchema>;
 
 const EDITABLE = [...SPEC_ATTRIBUTE_KEYS, 'club', 'status', 'carryEnteredM', 'inBagSince', 'roundsSince', 'practiceSessionsSince'] as const;
 
-/** POST /api/players/:id/bag/clubs (staff): a club goes in the bag. */
+/** POST /api/players/:id/bag/clubs (staff, or the player for their own bag, as in a remote intake): a club goes in the bag. */
 export async function addBagClub(actor: Actor, playerId: string, body: BagClubBody): Promise<BagClubState> {
-  requireStaff(actor);
   const player = await findVisiblePlayer(actor, playerId);
   const values: Record<string, unknown> = { shopId: player.shopId, playerId: player.id, version: 1 };
   for (const key of EDITABLE) values[key] = body[key] ?? null;
@@ -159,9 +158,8 @@ async function saveVersioned(actor: Actor, row: BagClubModel, version: number, c
   });
 }
 
-/** PATCH /api/bag-clubs/:id (staff): only the keys sent change. */
+/** PATCH /api/bag-clubs/:id (staff, or the player for their own club): only the keys sent change. */
 export async function updateBagClub(actor: Actor, id: string, body: BagClubUpdate): Promise<BagClubState> {
-  requireStaff(actor);
   const row = await findVisibleBagClub(actor, id);
   const changes: Record<string, unknown> = {};
   for (const key of EDITABLE) if (body[key] !== undefined) changes[key] = body[key];

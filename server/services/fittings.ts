@@ -8,6 +8,8 @@ import { bumpFittingRevision } from './fitting-revision';
 import { notFoundAs } from './not-found';
 import { findVisiblePlayer } from './players';
 import { countShotsByFitting } from './shot-store';
+import { recordStep } from './fitting-course';
+import { unreadCounts } from './fitting-messages';
 
 const countShots = (ids: string[]) => countShotsByFitting(FittingModel.sequelize!, ids);
 
@@ -16,7 +18,7 @@ const include = [
   { model: User, as: 'fitter', attributes: ['id', 'name'] },
 ];
 
-export function toFitting(f: FittingModel, shotCount = 0): Fitting {
+export function toFitting(f: FittingModel, shotCount = 0, unreadMessages = 0): Fitting {
   return {
     id: f.id,
     shopId: f.shopId,
@@ -34,6 +36,8 @@ export function toFitting(f: FittingModel, shotCount = 0): Fitting {
     notes: f.notes,
     remote: f.remote,
     shotCount,
+    courseStep: f.courseStep,
+    unreadMessages,
     createdAt: f.createdAt.toISOString(),
     updatedAt: f.updatedAt.toISOString(),
   };
@@ -65,10 +69,12 @@ export async function listFittings(actor: Actor, filters: FittingListQuery): Pro
     if (filters.to) range[Op.lte] = filters.to;
     where.push({ date: range });
   }
+  if (filters.step) where.push({ courseStep: filters.step });
   if (filters.q) where.push({ '$player.name$': { [Op.like]: containsPattern(filters.q) } } as WhereOptions<FittingModel>);
   const fittings = await FittingModel.findAll({ where: { [Op.and]: where }, include, order: ORDER[filters.sort], limit: 500 });
-  const shots = await countShots(fittings.map((f) => f.id));
-  return fittings.map((f) => toFitting(f, shots.get(f.id) ?? 0));
+  const ids = fittings.map((f) => f.id);
+  const [shots, unread] = await Promise.all([countShots(ids), unreadCounts(actor, ids)]);
+  return fittings.map((f) => toFitting(f, shots.get(f.id) ?? 0, unread.get(f.id) ?? 0));
 }
 
 /** A fitting the actor may see, or 404. */
@@ -80,8 +86,8 @@ export async function findVisibleFitting(actor: Actor, id: string): Promise<Fitt
 
 export async function getFitting(actor: Actor, id: string): Promise<Fitting> {
   const fitting = await findVisibleFitting(actor, id);
-  const shots = await countShots([id]);
-  return toFitting(fitting, shots.get(id) ?? 0);
+  const [shots, unread] = await Promise.all([countShots([id]), unreadCounts(actor, [id])]);
+  return toFitting(fitting, shots.get(id) ?? 0, unread.get(id) ?? 0);
 }
 
 async function checkFitter(actor: Actor, fitterId: string): Promise<void> {
@@ -94,19 +100,28 @@ export async function createFitting(actor: Actor, body: z.output<typeof fittingB
   await notFoundAs(findVisiblePlayer(actor, body.playerId), () => new HttpError(400, 'VALIDATION_FAILED', 'Choose a player of your shop.', [{ path: ['playerId'], message: 'Unknown player' }]));
   const fitterId = body.fitterId ?? actor.id;
   await checkFitter(actor, fitterId);
-  const fitting = await FittingModel.create({
-    shopId: actor.shopId,
-    playerId: body.playerId,
-    fitterId,
-    date: body.date,
-    venue: body.venue,
-    temperatureC: body.temperatureC,
-    altitudeM: body.altitudeM,
-    humidityPct: body.humidityPct,
-    groundFirmness: body.groundFirmness,
-    ball: body.ball,
-    notes: body.notes,
-    remote: body.remote,
+  const step = body.remote ? 'requested' : 'in-progress';
+  const fitting = await FittingModel.sequelize!.transaction(async (transaction) => {
+    const f = await FittingModel.create(
+      {
+        shopId: actor.shopId,
+        playerId: body.playerId,
+        fitterId,
+        date: body.date,
+        venue: body.venue,
+        temperatureC: body.temperatureC,
+        altitudeM: body.altitudeM,
+        humidityPct: body.humidityPct,
+        groundFirmness: body.groundFirmness,
+        ball: body.ball,
+        notes: body.notes,
+        remote: body.remote,
+        courseStep: step,
+      },
+      { transaction },
+    );
+    await recordStep({ fitting: f, step, direction: 'forward', byUserId: actor.id, transaction });
+    return f;
   });
   return getFitting(actor, fitting.id);
 }

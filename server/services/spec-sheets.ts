@@ -13,6 +13,7 @@ import { WORKSHOP_CAUTION, type SpecSheet, type SpecSheetChoice } from '../schem
 import { type Actor, isStaff, requireStaff } from './actor';
 import { analyseFitting } from './analysis';
 import { bagViewOf, stateOf, type BagClubState } from './bags';
+import { noticeStep, reachStep } from './fitting-course';
 import { findVisibleFitting } from './fittings';
 import type { Mailer } from './mailer';
 import { choiceFigures, rivalOf } from './spec-sheet-figures';
@@ -163,6 +164,8 @@ export async function sendSpecSheet(sequelize: Sequelize, actor: Actor, fittingI
   } else {
     record = await SpecSheetRecord.create({ shopId: fitting.shopId, fittingId, playerId: fitting.playerId, state: 'sent', content, sentAt: now, sentBy: actor.id, acceptedAt: null, acceptedBy: null });
   }
+  // The course: the recommendation is sent (the sheet's own e-mail tells the player).
+  await reachStep(fitting, 'recommendation-sent', actor.id);
   const sent = fromRecord(record);
   const owners = await User.findAll({ where: { shopId: fitting.shopId, role: 'owner', active: true }, attributes: ['email'] });
   const sender = await User.findByPk(actor.id, { attributes: ['email', 'name', 'units'] });
@@ -175,12 +178,15 @@ export async function sendSpecSheet(sequelize: Sequelize, actor: Actor, fittingI
 }
 
 /** POST /api/spec-sheets/:id/accept: the player accepts their sheet (only the player; staff 403). */
-export async function acceptSpecSheet(actor: Actor, id: string): Promise<SpecSheet> {
+export async function acceptSpecSheet(actor: Actor, id: string, notice?: { mailer: Mailer; appUrl: string }): Promise<SpecSheet> {
   if (actor.role !== 'player') throw new HttpError(403, 'FORBIDDEN', 'Only the player accepts their spec sheet.');
   const record = await findVisibleSheet(actor, id);
   if (record.state !== 'accepted') {
-    await SpecSheetRecord.update({ state: 'accepted', acceptedAt: new Date(), acceptedBy: actor.id }, { where: { id: record.id, state: 'sent' } });
+    const [changed] = await SpecSheetRecord.update({ state: 'accepted', acceptedAt: new Date(), acceptedBy: actor.id }, { where: { id: record.id, state: 'sent' } });
     await record.reload();
+    // The course: accepted, and the fitter hears of it.
+    const fitting = changed ? await findVisibleFitting(actor, record.fittingId) : null;
+    if (fitting && (await reachStep(fitting, 'accepted', actor.id)) && notice) await noticeStep(notice.mailer, notice.appUrl, fitting, 'accepted', 'forward');
   }
   return fromRecord(record);
 }

@@ -68,6 +68,8 @@ function screens(ids: Awaited<ReturnType<typeof demoIds>>): Row[] {
     { path: `/fittings/${ids.fitting}/edit`, title: 'Edit fitting', shown: STAFF },
     // Nell's fitting is not remote: only staff import into it.
     { path: `/fittings/${ids.fitting}/import`, title: 'Import a bay file', shown: STAFF },
+    { path: `/fittings/${ids.fitting}/intake`, title: /Intake/i, shown: ALL },
+    { path: `/fittings/${ids.fitting}/messages`, title: 'Messages', shown: ALL },
     { path: `/bay-files/${ids.bayFile}/remap`, title: 'Change mapping', shown: STAFF },
     { path: `/builds/${ids.build}/edit`, title: 'Edit build', shown: STAFF },
     { path: '/my-fittings', title: 'My fittings', shown: ['player'] },

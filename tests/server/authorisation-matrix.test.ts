@@ -20,7 +20,7 @@ import { QueryTypes } from 'sequelize';
 import request from 'supertest';
 import { buildBagClub } from '@/fixtures/bag-builders';
 import { buildFitting, buildPlayer, buildShop, buildUser } from '@/fixtures/builders';
-import { BayFile, Build, ChosenBuild, type Fitting, type Player, Recipe, Session, type Shop, type User } from '@/server/models';
+import { BayFile, Build, ChosenBuild, type Fitting, type Player, Recipe, Session, type Shop, ShopRequestLink, type User } from '@/server/models';
 import type { Mailer } from '@/server/services/mailer';
 import { insertShots } from '@/server/services/shot-store';
 import { sendSpecSheet } from '@/server/services/spec-sheets';
@@ -129,10 +129,11 @@ const ROWS: Record<string, Row> = {
   },
 
   'GET /api/players/:id/bag': { expect: [401, 200, 404, 200, 200, 404, 404], params: (w) => ({ id: w.playerA.id }) },
-  'POST /api/players/:id/bag/clubs': { expect: [401, 403, 403, 201, 201, 404, 404], params: (w) => ({ id: w.playerA.id }), send: (req) => req.send({ club: '4I', carryEnteredM: 100 + (next() % 300) }), write: true },
+  // a player adds to their own bag (a remote intake), never to another's
+  'POST /api/players/:id/bag/clubs': { expect: [401, 201, 404, 201, 201, 404, 404], params: (w) => ({ id: w.playerA.id }), send: (req) => req.send({ club: '4I', carryEnteredM: 100 + (next() % 300) }), write: true },
   // a fresh club (version 1) per call: an accepted save raises the version
   'PATCH /api/bag-clubs/:id': {
-    expect: [401, 403, 403, 200, 200, 404, 404],
+    expect: [401, 200, 404, 200, 200, 404, 404],
     params: async (w) => ({ id: (await buildBagClub(w.playerA, '9I')).id }),
     send: (req) => req.send({ version: 1, carryEnteredM: 100 + (next() % 300) }),
     write: true,
@@ -173,6 +174,32 @@ const ROWS: Record<string, Row> = {
   'GET /api/spec-sheets/:id/pdf': { expect: [401, 200, 404, 200, 200, 404, 404], params: (w) => ({ id: w.sheetA.id! }) },
   // only the player accepts their sheet: staff of any shop 403 before the lookup; a fresh sheet per call
   'POST /api/spec-sheets/:id/accept': { expect: [401, 200, 404, 403, 403, 403, 403], params: async (w) => ({ id: (await sentSheet(w)).id! }), write: true },
+
+  // remote fittings: the course, the intake, messages, the player's plain words, the request page
+  'GET /api/fittings/:id/plain-words': { expect: [401, 200, 404, 200, 200, 404, 404], params: (w) => ({ id: w.chosenFittingA.id }) },
+  'GET /api/fittings/:id/course': { expect: [401, 200, 404, 200, 200, 404, 404], params: (w) => ({ id: w.fittingA.id }) },
+  // staff move the course: a fresh requested fitting per call, moved on to "in progress"
+  'POST /api/fittings/:id/course': {
+    expect: [401, 403, 403, 200, 200, 404, 404],
+    params: async (w) => ({ id: (await requestedFitting(w)).id }),
+    send: json({ to: 'in-progress' }),
+    write: true,
+  },
+  'GET /api/fittings/:id/intake': { expect: [401, 200, 404, 200, 200, 404, 404], params: (w) => ({ id: w.fittingA.id }) },
+  // only the player answers the intake: staff of any shop 403 before the lookup
+  'PUT /api/fittings/:id/intake': {
+    expect: [401, 200, 404, 403, 403, 403, 403],
+    params: (w) => ({ id: w.fittingA.id }),
+    send: (req) => req.send({ handedness: 'right', heightCm: 150 + (next() % 50), wristToFloorCm: 80, handicap: 10 }),
+    write: true,
+  },
+  'GET /api/fittings/:id/messages': { expect: [401, 200, 404, 200, 200, 404, 404], params: (w) => ({ id: w.fittingA.id }) },
+  'POST /api/fittings/:id/messages': { expect: [401, 201, 404, 201, 201, 404, 404], params: (w) => ({ id: w.fittingA.id }), send: (req) => req.send({ body: `Message ${next()}` }), write: true },
+  'POST /api/fittings/:id/messages/read': { expect: [401, 200, 404, 200, 200, 404, 404], params: (w) => ({ id: w.fittingA.id }) },
+  // the public page shows the shop's name to anyone; a player of that shop asks, staff 403, another shop 404
+  'GET /api/requests/:slug': { expect: [200, 200, 200, 200, 200, 200, 200], params: (w) => ({ slug: w.slugA }) },
+  'POST /api/requests/:slug': { expect: [401, 201, 201, 403, 403, 404, 404], params: (w) => ({ slug: w.slugA }), send: (req) => req.send({ note: `Request ${next()}` }), write: true },
+  'GET /api/shop/request-link': { expect: [401, 403, 403, 200, 200, 200, 200] },
 };
 
 /** The route a row's key names (a key may add the record's state in parentheses). */
@@ -225,6 +252,13 @@ async function chosenFitting(w: { shopA: Shop; playerA: Player; fitterA: User })
   return fitting;
 }
 
+/** A fresh remote fitting of player A at "requested". */
+async function requestedFitting(w: { shopA: Shop; playerA: Player; fitterA: User }): Promise<Fitting> {
+  const fitting = await buildFitting(w.shopA, w.playerA, w.fitterA, { remote: true });
+  await fitting.update({ courseStep: 'requested' });
+  return fitting;
+}
+
 const quietMailer: Mailer = { async send() {} };
 
 /** A fresh spec sheet sent to player A (through the service, as fitter A). */
@@ -254,8 +288,9 @@ async function buildWorld() {
   const bagClubA = await buildBagClub(playerA, '7I', { loftDeg: 34 });
   const chosenFittingA = await chosenFitting({ shopA, playerA, fitterA });
   const sheetA = await sentSheet({ shopA, playerA, fitterA });
+  const { slug: slugA } = await ShopRequestLink.create({ shopId: shopA.id, slug: `shop-a-${unique()}` });
   const users: Record<Exclude<Role, 'anonymous'>, User> = { playerA: userA, playerB: userB, fitterA, ownerA, fitterZ, ownerZ };
-  return { shopA, shopZ, users, playerA, fitterA, fittingA, bayFileA, buildA, recipeA, bagClubA, chosenFittingA, sheetA };
+  return { shopA, shopZ, users, playerA, fitterA, fittingA, bayFileA, buildA, recipeA, bagClubA, chosenFittingA, sheetA, slugA };
 }
 
 /** A fresh session token for a role (sign-out and sign-out-everywhere end sessions as they go). */
@@ -270,7 +305,8 @@ async function tokenFor(role: Role): Promise<string | null> {
 async function fingerprint(): Promise<string> {
   const rows = await ctx.sequelize.query<{ Table: string; Checksum: number | bigint }>(
     `CHECKSUM TABLE shops, users, players, fittings, bay_files, shots, builds, recipes, password_resets, shop_margins,
-       bag_clubs, bag_club_history, chosen_builds, chosen_take_outs, chosen_build_confirmations, spec_sheets, workshop_settings`,
+       bag_clubs, bag_club_history, chosen_builds, chosen_take_outs, chosen_build_confirmations, spec_sheets, workshop_settings,
+       fitting_course_steps, fitting_intakes, fitting_messages, fitting_message_reads, shop_request_links`,
     { type: QueryTypes.SELECT },
   );
   return rows.map((r) => `${r.Table}:${String(r.Checksum)}`).join(' ');

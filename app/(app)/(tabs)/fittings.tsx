@@ -5,6 +5,7 @@ import { FittingList } from '@/components/fittings/fitting-list';
 import { useDebouncedValue } from '@/components/use-debounced-value';
 import { Button } from '@/components/ui/button';
 import { Screen } from '@/components/ui/screen';
+import { RequestLinkNote } from '@/components/remote/request-link-note';
 
 export default function FittingsScreen() {
   const router = useRouter();
@@ -14,13 +15,14 @@ export default function FittingsScreen() {
   return (
     <Screen>
       <Button title="New fitting" variant="secondary" compact onPress={() => router.push('/fittings/new')} />
+      <RequestLinkNote />
       <FittingFilterBar value={filters} onChange={setFilters} />
       <FittingList
-        filters={{ q: q.trim() || undefined, from: filters.from || undefined, to: filters.to || undefined, sort: filters.sort }}
+        filters={{ q: q.trim() || undefined, from: filters.from || undefined, to: filters.to || undefined, sort: filters.sort, step: filters.step === 'any' ? undefined : filters.step }}
         emptyTitle={filtered ? 'No fitting matches' : 'No fittings yet'}
         emptyMessage={
           filtered
-            ? 'No fitting of your shop matches this search and these dates. Clear the filters to see them all.'
+            ? 'No fitting of your shop matches this search, these dates and this step. Clear the filters to see them all.'
             : "A fitting is one appointment: a player, a date and a venue. Start one from here or from a player's page."
         }
         emptyAction={filtered ? undefined : <Button title="New fitting" onPress={() => router.push('/fittings/new')} />}

@@ -94,9 +94,10 @@ describe('POST /api/players/:id/bag/clubs', () => {
     }
   });
 
-  it('POST answers 401 anonymous, 403 the player, 404 another shop', async () => {
+  it('POST answers 401 anonymous, 201 the player for their own bag (a remote intake), 404 another player and another shop', async () => {
     expect((await request(ctx.app).post(url()).set(APP_HEADER).send(driver)).status).toBe(401);
-    expect((await as.playerA.post(url()).set(APP_HEADER).send(driver)).status).toBe(403);
+    expect((await as.playerA.post(url()).set(APP_HEADER).send({ ...driver, club: '3H' })).status).toBe(201);
+    expect((await as.playerB.post(url()).set(APP_HEADER).send(driver)).status).toBe(404);
     expect((await as.rivalFitter.post(url()).set(APP_HEADER).send(driver)).status).toBe(404);
     expect((await as.rivalOwner.post(url()).set(APP_HEADER).send(driver)).status).toBe(404);
   });
@@ -133,11 +134,11 @@ describe('PATCH /api/bag-clubs/:id', () => {
     expect(bag.clubs.find((c: { id: string }) => c.id === club.id)).toMatchObject({ loftDeg: 19, lengthIn: null, version: 2 });
   });
 
-  it('PATCH answers 401 anonymous, 403 the player, 404 another shop and an unknown club, 400 out of range', async () => {
+  it('PATCH answers 401 anonymous, 200 the player for their own club, 404 another player, another shop and an unknown club, 400 out of range', async () => {
     const club = await buildBagClub(world.player, '3W');
     const url = `/api/bag-clubs/${club.id}`;
     expect((await request(ctx.app).patch(url).set(APP_HEADER).send({ version: 1 })).status).toBe(401);
-    expect((await as.playerA.patch(url).set(APP_HEADER).send({ loftDeg: 15, version: 1 })).status).toBe(403);
+    expect((await as.playerB.patch(url).set(APP_HEADER).send({ loftDeg: 15, version: 1 })).status).toBe(404);
     expect((await as.rivalOwner.patch(url).set(APP_HEADER).send({ loftDeg: 15, version: 1 })).status).toBe(404);
     expect((await as.fitter.patch(`/api/bag-clubs/${UNKNOWN}`).set(APP_HEADER).send({ loftDeg: 15, version: 1 })).status).toBe(404);
     const bad = await as.fitter.patch(url).set(APP_HEADER).send({ lengthIn: 52, version: 1 });
@@ -145,6 +146,7 @@ describe('PATCH /api/bag-clubs/:id', () => {
     expect(bad.body.error.details[0].path).toEqual(['lengthIn']);
     const noVersion = await as.fitter.patch(url).set(APP_HEADER).send({ loftDeg: 15 });
     expect(noVersion.status).toBe(400);
+    expect((await as.playerA.patch(url).set(APP_HEADER).send({ loftDeg: 15, version: 1 })).status).toBe(200);
   });
 });
 

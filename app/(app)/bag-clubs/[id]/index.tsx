@@ -32,7 +32,7 @@ export default function BagClubScreen() {
           <Section
             title="Build and carry"
             action={
-              isStaff(me.role) ? (
+              isStaff(me.role) || me.playerId === query.data.playerId ? (
                 <Button title="Edit" compact variant="secondary" onPress={() => router.push({ pathname: '/bag-clubs/[id]/edit', params: { id, playerId: query.data.playerId } })} />
               ) : null
             }

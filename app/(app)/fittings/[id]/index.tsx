@@ -9,6 +9,8 @@ import { SessionView } from '@/components/fittings/session-view';
 import { ShotsView } from '@/components/fittings/shots-view';
 import { useFittingPageState } from '@/components/fittings/use-fitting-page-state';
 import { formatDate } from '@/components/format';
+import { CourseSection } from '@/components/remote/course-section';
+import { PlayerFittingView } from '@/components/remote/player-fitting-view';
 import { useFittingQuery } from '@/components/queries/fittings';
 import { isStaff } from '@/components/session/permissions';
 import { useMe } from '@/components/session/session-provider';
@@ -36,11 +38,21 @@ export default function FittingScreen() {
   }
   const fitting = query.data;
   const empty = fitting.shotCount === 0;
+  // A player sees their own view whatever the address asks for (?view= is the staff's).
+  if (!isStaff(me.role)) {
+    return (
+      <Screen>
+        <Stack.Screen options={{ title: `${fitting.playerName} · ${formatDate(fitting.date)}` }} />
+        <PlayerFittingView fitting={fitting} />
+      </Screen>
+    );
+  }
   return (
     <Screen>
       <Stack.Screen options={{ title: `${fitting.playerName} · ${formatDate(fitting.date)}` }} />
+      <CourseSection fitting={fitting} staff />
       <SegmentedControl label="Views of the fitting" value={current} options={FITTING_VIEWS} onChange={(v) => router.setParams({ view: v })} />
-      {empty && (current === 'decide' || current === 'shots' || current === 'ladder') ? <FittingStart fitting={fitting} canImport={isStaff(me.role) || fitting.remote} /> : null}
+      {empty && (current === 'decide' || current === 'shots' || current === 'ladder') ? <FittingStart fitting={fitting} canImport /> : null}
       {!empty && current === 'decide' ? <DecideView fitting={fitting} state={state} /> : null}
       {!empty && current === 'shots' ? <ShotsView fitting={fitting} state={state} /> : null}
       {!empty && current === 'ladder' ? <LadderView fitting={fitting} state={state} /> : null}
