@@ -32,6 +32,8 @@ export const ROUTE_TITLES: Readonly<Record<string, string>> = {
   '/fittings/[id]/spec-sheet': 'Spec sheet',
   '/spec-sheets/[id]': 'Spec sheet',
   '/workshop-settings': 'Workshop settings',
+  '/fittings/[id]/intake': 'Intake',
+  '/fittings/[id]/messages': 'Messages',
 };
 
 /**
