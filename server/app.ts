@@ -13,10 +13,13 @@ import { bagsRouter } from './routes/bags';
 import { bayFilesRouter } from './routes/bay-files';
 import { chosenBuildsRouter } from './routes/chosen-builds';
 import { demoRouter } from './routes/demo';
+import { fittingArchiveRouter } from './routes/fitting-archive';
 import { fittingsRouter } from './routes/fittings';
+import { invitationsRouter } from './routes/invitations';
 import { healthRouter } from './routes/health';
 import { playersRouter } from './routes/players';
 import { recipesRouter } from './routes/recipes';
+import { refuseClosedShop, shopRouter } from './routes/shop';
 import { shopMarginsRouter } from './routes/shop-margins';
 import { shotsRouter } from './routes/shots';
 import { specSheetsRouter } from './routes/spec-sheets';
@@ -86,14 +89,18 @@ export function createApp({ sequelize, config, mailer, serveWeb = false, log, co
   api.use('/health', healthRouter(sequelize));
   const mail = mailer ?? createMailer(config.mail.smtpUrl, config.mail.from);
   api.use('/demo', demoRouter());
-  api.use(authRouter(config, mail, rateLimits ?? createRateLimits(sequelize, config)));
-  // Everything below needs a signed-in user; each service checks role and shop again.
-  api.use(['/players', '/fittings', '/team', '/recipes', '/bay-files', '/shots', '/builds', '/bag-clubs', '/spec-sheets', '/workshop-settings', '/shop'], authenticate(config));
-  api.use('/players', playersRouter());
+  const limits = rateLimits ?? createRateLimits(sequelize, config);
+  api.use(authRouter(config, mail, limits));
+  // Everything below needs a signed-in user of an open shop; each service checks role and shop again.
+  api.use(['/players', '/fittings', '/team', '/recipes', '/bay-files', '/shots', '/builds', '/bag-clubs', '/spec-sheets', '/workshop-settings', '/shop', '/invitations'], authenticate(config), refuseClosedShop);
+  api.use(invitationsRouter(config, mail, limits));
+  api.use(fittingArchiveRouter());
+  api.use('/players', playersRouter(sequelize));
   api.use('/fittings', fittingsRouter());
   api.use('/team', teamRouter());
   api.use('/recipes', recipesRouter());
   api.use('/shop', shopMarginsRouter());
+  api.use('/shop', shopRouter(sequelize));
   api.use(bayFilesRouter(sequelize, config, pool, commitHooks));
   api.use(shotsRouter(sequelize, new AnalysisCache(config.analysisCacheBytes)));
   api.use(bagsRouter(sequelize));

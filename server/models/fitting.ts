@@ -19,6 +19,8 @@ export class Fitting extends Model<InferAttributes<Fitting>, InferCreationAttrib
   declare remote: CreationOptional<boolean>;
   /** Raised with every change the analysis depends on (server/services/fitting-revision.ts). */
   declare revision: CreationOptional<number>;
+  /** Hidden from lists unless asked for. */
+  declare archivedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -39,6 +41,7 @@ export class Fitting extends Model<InferAttributes<Fitting>, InferCreationAttrib
         notes: { type: DataTypes.TEXT, allowNull: true },
         remote: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         revision: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
+        archivedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { archivedFilterSchema } from './common';
 import { optionalText } from './common';
 
 export const venueSchema = z.enum(['indoor', 'outdoor']);
@@ -49,6 +50,8 @@ export const fittingSchema = z.object({
   ball: z.string().nullable(),
   notes: z.string().nullable(),
   remote: z.boolean(),
+  /** Hidden from lists unless asked for. */
+  archived: z.boolean().default(false),
   shotCount: z.number(),
   createdAt: z.string(),
   updatedAt: z.string(),
@@ -70,6 +73,8 @@ export const fittingListQuerySchema = z
     from: z.iso.date({ message: 'From is a date as YYYY-MM-DD.' }).optional(),
     to: z.iso.date({ message: 'To is a date as YYYY-MM-DD.' }).optional(),
     sort: fittingSortSchema.default('date-desc'),
+    /** Archived fittings: hidden (default), shown with the rest, or only them. */
+    archived: archivedFilterSchema.default('hide'),
   })
   .refine((f) => !f.from || !f.to || f.from <= f.to, { path: ['to'], message: 'To is on or after From.' });
 /** What a list asks for (sort optional: newest first). */

@@ -11,3 +11,4 @@ export * from './bags';
 export * from './spec-sheets';
 export * from './workshop-settings';
 export * from './shop-margins';
+export * from './shops';

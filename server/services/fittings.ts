@@ -6,7 +6,7 @@ import type { Fitting, FittingListQuery, fittingBodySchema, fittingUpdateSchema 
 import { type Actor, isStaff, requireStaff } from './actor';
 import { bumpFittingRevision } from './fitting-revision';
 import { notFoundAs } from './not-found';
-import { findVisiblePlayer } from './players';
+import { archivedWhere, findVisiblePlayer } from './players';
 import { countShotsByFitting } from './shot-store';
 
 const countShots = (ids: string[]) => countShotsByFitting(FittingModel.sequelize!, ids);
@@ -33,6 +33,7 @@ export function toFitting(f: FittingModel, shotCount = 0): Fitting {
     ball: f.ball,
     notes: f.notes,
     remote: f.remote,
+    archived: f.archivedAt != null,
     shotCount,
     createdAt: f.createdAt.toISOString(),
     updatedAt: f.updatedAt.toISOString(),
@@ -65,6 +66,8 @@ export async function listFittings(actor: Actor, filters: FittingListQuery): Pro
     if (filters.to) range[Op.lte] = filters.to;
     where.push({ date: range });
   }
+  const archived = archivedWhere(filters.archived ?? 'hide');
+  if (archived) where.push(archived as WhereOptions<FittingModel>);
   if (filters.q) where.push({ '$player.name$': { [Op.like]: containsPattern(filters.q) } } as WhereOptions<FittingModel>);
   const fittings = await FittingModel.findAll({ where: { [Op.and]: where }, include, order: ORDER[filters.sort], limit: 500 });
   const shots = await countShots(fittings.map((f) => f.id));
