@@ -39,7 +39,7 @@ export default function PlayerScreen() {
             <Button title="Edit" variant="secondary" compact onPress={() => router.push({ pathname: '/players/[id]/edit', params: { id } })} />
             {player.hasAccount ? null : (
               <Button
-                title="Give sign-in"
+                title="Invite to sign in"
                 variant="secondary"
                 compact
                 onPress={() => router.push({ pathname: '/players/[id]/account', params: { id } })}
