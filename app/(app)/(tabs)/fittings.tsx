@@ -5,18 +5,21 @@ import { FittingList } from '@/components/fittings/fitting-list';
 import { useDebouncedValue } from '@/components/use-debounced-value';
 import { Button } from '@/components/ui/button';
 import { Screen } from '@/components/ui/screen';
+import { SwitchField } from '@/components/ui/switch-field';
 
 export default function FittingsScreen() {
   const router = useRouter();
   const [filters, setFilters] = useState<FittingFilterText>(NO_FITTING_FILTERS);
   const q = useDebouncedValue(filters.q);
+  const [showArchived, setShowArchived] = useState(false);
   const filtered = hasFittingFilters(filters);
   return (
     <Screen>
       <Button title="New fitting" variant="secondary" compact onPress={() => router.push('/fittings/new')} />
       <FittingFilterBar value={filters} onChange={setFilters} />
+      <SwitchField label="Show archived fittings" value={showArchived} onChange={setShowArchived} />
       <FittingList
-        filters={{ q: q.trim() || undefined, from: filters.from || undefined, to: filters.to || undefined, sort: filters.sort }}
+        filters={{ q: q.trim() || undefined, from: filters.from || undefined, to: filters.to || undefined, sort: filters.sort, archived: showArchived ? 'show' : 'hide' }}
         emptyTitle={filtered ? 'No fitting matches' : 'No fittings yet'}
         emptyMessage={
           filtered
