@@ -29,7 +29,7 @@ async function shot(page: Page, name: string): Promise<void> {
 /** The last link matching a pattern in a message to an address (maildev's REST list). */
 async function linkFor(page: Page, to: string, pattern: RegExp): Promise<string> {
   for (let i = 0; i < 50; i++) {
-    const list = (await (await page.request.get(`${INBOX}/email`)).json()) as { to: { address: string }[]; text: string }[];
+    const list = (await (await page.request.get(`${INBOX}/api/email`)).json()) as { to: { address: string }[]; text: string }[];
     const hit = list.filter((m) => m.to.some((t) => t.address === to)).at(-1);
     const link = hit ? pattern.exec(hit.text)?.[0] : undefined;
     if (link) return link;
