@@ -199,3 +199,59 @@ export function unitSystemOf(unit: string): UnitSystem | null {
   if (info.unit === 'm' || info.unit === 'm/s' || info.unit === 'km/h') return 'metric';
   return null;
 }
+
+/** A length or height as a person reads it (a player's height, a club's length). */
+export type LengthUnit = 'in' | 'cm';
+/** An altitude as a person reads it. */
+export type AltitudeUnit = 'ft' | 'm';
+/** A temperature as a person reads it (°F or °C). */
+export type TemperatureUnit = 'f' | 'c';
+
+/** Centimetres per inch (exact: 1 in = 0.0254 m). */
+export const CM_PER_IN = INCH_M * 100;
+
+/**
+ * Centimetres in a length unit. O(1).
+ * @example cmTo(254, 'in') // => 100
+ */
+export function cmTo(cm: number, unit: LengthUnit): number {
+  return unit === 'cm' ? cm : cm / CM_PER_IN;
+}
+
+/** A length in a unit, in centimetres. O(1). @example toCm(100, 'in') // => 254 */
+export function toCm(value: number, unit: LengthUnit): number {
+  return unit === 'cm' ? value : value * CM_PER_IN;
+}
+
+/** Inches in a length unit (club lengths are kept in inches). O(1). @example inchesTo(45, 'cm') // => 114.3 */
+export function inchesTo(inches: number, unit: LengthUnit): number {
+  return unit === 'in' ? inches : inches * CM_PER_IN;
+}
+
+/** A length in a unit, in inches. O(1). @example toInches(114.3, 'cm') // => 45 */
+export function toInches(value: number, unit: LengthUnit): number {
+  return unit === 'in' ? value : value / CM_PER_IN;
+}
+
+/** Metres in an altitude unit (exact: 1 ft = 0.3048 m). O(1). @example metresTo(304.8, 'ft') // => 1000 */
+export function metresTo(metres: number, unit: AltitudeUnit): number {
+  return unit === 'm' ? metres : metres / FOOT_M;
+}
+
+/** An altitude in a unit, in metres. O(1). @example toMetres(1000, 'ft') // => 304.8 */
+export function toMetres(value: number, unit: AltitudeUnit): number {
+  return unit === 'm' ? value : value * FOOT_M;
+}
+
+/** Degrees Celsius in a temperature unit: °F = °C·9/5 + 32. O(1). @example celsiusTo(100, 'f') // => 212 */
+export function celsiusTo(celsius: number, unit: TemperatureUnit): number {
+  return unit === 'c' ? celsius : (celsius * 9) / 5 + 32;
+}
+
+/** A temperature in a unit, in degrees Celsius: °C = (°F − 32)·5/9. O(1). @example toCelsius(212, 'f') // => 100 */
+export function toCelsius(value: number, unit: TemperatureUnit): number {
+  return unit === 'c' ? value : ((value - 32) * 5) / 9;
+}
+
+/** The symbol shown beside a value. */
+export const UNIT_SYMBOL: Readonly<Record<LengthUnit | AltitudeUnit | TemperatureUnit, string>> = { in: 'in', cm: 'cm', ft: 'ft', m: 'm', f: '°F', c: '°C' };

@@ -81,6 +81,7 @@ export const api = {
   post: <T>(path: string, body?: unknown) => apiRequest<T>('POST', path, { body }),
   patch: <T>(path: string, body: unknown) => apiRequest<T>('PATCH', path, { body }),
   put: <T>(path: string, body: unknown) => apiRequest<T>('PUT', path, { body }),
+  delete: <T>(path: string) => apiRequest<T>('DELETE', path),
 };
 
 /** The message to show for any thrown value. */

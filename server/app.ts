@@ -13,13 +13,16 @@ import { bagsRouter } from './routes/bags';
 import { bayFilesRouter } from './routes/bay-files';
 import { chosenBuildsRouter } from './routes/chosen-builds';
 import { demoRouter } from './routes/demo';
+import { fittingArchiveRouter } from './routes/fitting-archive';
 import { fittingsRouter } from './routes/fittings';
 import { fittingCourseRouter } from './routes/fitting-course';
 import { fittingRequestsRouter } from './routes/fitting-requests';
 import { createFittingLimits, type FittingLimits } from './middleware/fitting-rate-limits';
+import { invitationsRouter } from './routes/invitations';
 import { healthRouter } from './routes/health';
 import { playersRouter } from './routes/players';
 import { recipesRouter } from './routes/recipes';
+import { refuseClosedShop, shopRouter } from './routes/shop';
 import { shopMarginsRouter } from './routes/shop-margins';
 import { shotsRouter } from './routes/shots';
 import { specSheetsRouter } from './routes/spec-sheets';
@@ -91,18 +94,22 @@ export function createApp({ sequelize, config, mailer, serveWeb = false, log, co
   api.use('/health', healthRouter(sequelize));
   const mail = mailer ?? createMailer(config.mail.smtpUrl, config.mail.from);
   api.use('/demo', demoRouter());
-  api.use(authRouter(config, mail, rateLimits ?? createRateLimits(sequelize, config)));
-  // Everything below needs a signed-in user; each service checks role and shop again.
+  const limits = rateLimits ?? createRateLimits(sequelize, config);
+  api.use(authRouter(config, mail, limits));
   // The public request page answers anyone; asking for a fitting there needs a sign-in (the router checks).
-  const limits = fittingLimits ?? createFittingLimits(sequelize);
-  api.use(fittingRequestsRouter(config, mail, limits));
-  api.use(['/players', '/fittings', '/team', '/recipes', '/bay-files', '/shots', '/builds', '/bag-clubs', '/spec-sheets', '/workshop-settings', '/shop'], authenticate(config));
-  api.use('/players', playersRouter());
+  const remoteLimits = fittingLimits ?? createFittingLimits(sequelize);
+  api.use(fittingRequestsRouter(config, mail, remoteLimits));
+  // Everything below needs a signed-in user of an open shop; each service checks role and shop again.
+  api.use(['/players', '/fittings', '/team', '/recipes', '/bay-files', '/shots', '/builds', '/bag-clubs', '/spec-sheets', '/workshop-settings', '/shop', '/invitations'], authenticate(config), refuseClosedShop);
+  api.use(invitationsRouter(config, mail, limits));
+  api.use(fittingArchiveRouter());
+  api.use('/players', playersRouter(sequelize));
   api.use('/fittings', fittingsRouter());
-  api.use('/fittings', fittingCourseRouter(sequelize, config, mail, limits));
+  api.use('/fittings', fittingCourseRouter(sequelize, config, mail, remoteLimits));
   api.use('/team', teamRouter());
   api.use('/recipes', recipesRouter());
   api.use('/shop', shopMarginsRouter());
+  api.use('/shop', shopRouter(sequelize));
   api.use(bayFilesRouter(sequelize, config, pool, commitHooks));
   api.use(shotsRouter(sequelize, new AnalysisCache(config.analysisCacheBytes)));
   api.use(bagsRouter(sequelize));

@@ -6,6 +6,9 @@ import { createSequelize } from './db';
 import { migrateUp } from './migrate';
 import { createMailer } from './services/mailer';
 import { demoSignInHint, seedDemo } from './seed/demo';
+import { purgeClosedShops } from './services/shops';
+
+const PURGE_EVERY_MS = 60 * 60 * 1000;
 
 /** Once per start, before any request: migrations, and the demo into an empty database. */
 async function prepare(config: Config): Promise<void> {
@@ -14,6 +17,8 @@ async function prepare(config: Config): Promise<void> {
     await sequelize.authenticate();
     const applied = await migrateUp(sequelize);
     if (applied.length) console.log(`Migrations applied: ${applied.join(', ')}`);
+    const purged = await purgeClosedShops();
+    if (purged) console.log(`Closed shops past their grace period deleted: ${purged}`);
     if (process.env.DEMO_SEED === '1') {
       const seeded = await seedDemo(sequelize, new Date());
       console.log(seeded ? 'Demo data loaded into the empty database.' : 'Database has data: demo not loaded.');
@@ -36,6 +41,13 @@ async function serve(config: Config): Promise<void> {
     if (process.env.DEMO_SEED === '1') console.log(demoSignInHint());
     console.log('Press Ctrl-C to stop.\n');
   });
+  // Closed shops past their grace period: deleted every hour by the first process (and at start).
+  if (isFirstServer()) {
+    const purge = setInterval(() => {
+      purgeClosedShops().catch((err: unknown) => console.error('Purging closed shops failed:', err));
+    }, PURGE_EVERY_MS) as unknown as { unref?: () => void };
+    purge.unref?.();
+  }
   let stopping = false;
   const shutdown = (signal: string) => {
     if (stopping) return;

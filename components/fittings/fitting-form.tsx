@@ -10,7 +10,9 @@ import { Notice } from '../ui/notice';
 import { SwitchField } from '../ui/switch-field';
 import { TextField } from '../ui/text-field';
 import { colors, radius, space } from '../theme';
-import { fittingFormText, parseFittingForm, type FittingFormText } from './fitting-form-values';
+import { UNIT_SYMBOL } from '@/analysis/units';
+import { useMe } from '../session/session-provider';
+import { fittingFormText, parseFittingForm, type ConditionUnits, type FittingFormText } from './fitting-form-values';
 import { PlayerPicker } from './player-picker';
 import { useTextForm } from '../use-text-form';
 
@@ -39,7 +41,9 @@ const VENUES = [
 
 /** A fitting's player, date, venue and conditions; checked with the shared schema before sending. */
 export function FittingForm({ fitting, playerId, submitTitle, busy, error, onSubmit, onCancel }: FittingFormProps) {
-  const { text, set, errors, shown, submit } = useTextForm(() => fittingFormText(fitting, { playerId }), parseFittingForm, onSubmit, error);
+  const me = useMe();
+  const units: ConditionUnits = { temperature: me.temperatureUnit, altitude: me.altitudeUnit };
+  const { text, set, errors, shown, submit } = useTextForm(() => fittingFormText(fitting, { playerId }, units), (t) => parseFittingForm(t, units), onSubmit, error);
 
   return (
     <View style={styles.form}>
@@ -68,13 +72,13 @@ export function FittingForm({ fitting, playerId, submitTitle, busy, error, onSub
         <FormRow basisPx={96}>
           <TextField
             label="Temperature"
-            suffix="°C"
+            suffix={UNIT_SYMBOL[units.temperature]}
             value={text.temperatureC}
             onChangeText={set('temperatureC')}
             error={shown.temperatureC}
             inputMode="decimal"
           />
-          <TextField label="Altitude" suffix="m" value={text.altitudeM} onChangeText={set('altitudeM')} error={shown.altitudeM} inputMode="decimal" />
+          <TextField label="Altitude" suffix={UNIT_SYMBOL[units.altitude]} value={text.altitudeM} onChangeText={set('altitudeM')} error={shown.altitudeM} inputMode="decimal" />
           <TextField
             label="Humidity"
             suffix="%"

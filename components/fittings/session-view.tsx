@@ -8,6 +8,7 @@ import { Button } from '../ui/button';
 import { Section } from '../ui/section';
 import { FittingBayFiles } from './fitting-bay-files';
 import { FittingDetails } from './fitting-details';
+import { FittingRecordActions } from './fitting-record-actions';
 
 type SessionViewProps = { fitting: Fitting };
 
@@ -24,6 +25,7 @@ export function SessionView({ fitting }: SessionViewProps) {
       >
         <FittingDetails fitting={fitting} />
       </Section>
+      {isStaff(me.role) ? <FittingRecordActions fitting={fitting} /> : null}
     </View>
   );
 }

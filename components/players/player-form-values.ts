@@ -1,7 +1,12 @@
 import { playerBodySchema, type Player, type PlayerBody } from '@/server/schemas';
+import { cmTo, toCm, type LengthUnit } from '@/analysis/units';
 import { fieldErrorsFromZod, numberText, parseNumberFields, type FieldErrors } from '../forms';
 
-/** The player form's inputs, all text. Heights in cm. */
+/** A stored height shown in a unit, to a tenth. */
+const lengthText = (cm: number | null | undefined, unit: LengthUnit): string => (cm == null ? '' : numberText(Math.round(cmTo(cm, unit) * 10) / 10));
+const cmOf = (value: number | null | undefined, unit: LengthUnit) => (value == null ? value : toCm(value, unit));
+
+/** The player form's inputs, all text. Heights in the form's length unit (stored in cm). */
 export type PlayerFormText = {
   name: string;
   email: string;
@@ -14,13 +19,13 @@ export type PlayerFormText = {
 };
 
 /** The form for a new player (blank) or filled from a profile. */
-export function playerFormText(player?: Player): PlayerFormText {
+export function playerFormText(player?: Player, lengthUnit: LengthUnit = 'cm'): PlayerFormText {
   return {
     name: player?.name ?? '',
     email: player?.email ?? '',
     handedness: player?.handedness ?? 'right',
-    heightCm: numberText(player?.heightCm),
-    wristToFloorCm: numberText(player?.wristToFloorCm),
+    heightCm: lengthText(player?.heightCm, lengthUnit),
+    wristToFloorCm: lengthText(player?.wristToFloorCm, lengthUnit),
     handicap: handicapText(player?.handicap ?? null),
     usualMiss: player?.usualMiss ?? '',
     goals: player?.goals ?? '',
@@ -45,7 +50,7 @@ export function parseHandicapText(text: string): string {
 export type PlayerFormResult = { ok: true; body: PlayerBody } | { ok: false; errors: FieldErrors };
 
 /** Parses the numbers, then checks everything with the shared schema the server uses. */
-export function parsePlayerForm(text: PlayerFormText): PlayerFormResult {
+export function parsePlayerForm(text: PlayerFormText, lengthUnit: LengthUnit = 'cm'): PlayerFormResult {
   const numbers = parseNumberFields({
     heightCm: text.heightCm,
     wristToFloorCm: text.wristToFloorCm,
@@ -56,6 +61,8 @@ export function parsePlayerForm(text: PlayerFormText): PlayerFormResult {
     email: text.email,
     handedness: text.handedness,
     ...numbers.values,
+    heightCm: cmOf(numbers.values.heightCm as number | null | undefined, lengthUnit),
+    wristToFloorCm: cmOf(numbers.values.wristToFloorCm as number | null | undefined, lengthUnit),
     usualMiss: text.usualMiss,
     goals: text.goals,
   };

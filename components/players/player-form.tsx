@@ -7,6 +7,7 @@ import { FormRow } from '../ui/form-row';
 import { Notice } from '../ui/notice';
 import { TextField } from '../ui/text-field';
 import { space } from '../theme';
+import { useMe } from '../session/session-provider';
 import { parsePlayerForm, playerFormText, type PlayerFormText } from './player-form-values';
 import { useTextForm } from '../use-text-form';
 
@@ -27,7 +28,8 @@ const HANDEDNESS = [
 
 /** A player's profile: checked with the shared schema before it is sent. Lengths in cm. */
 export function PlayerForm({ player, submitTitle, busy, error, onSubmit, onCancel }: PlayerFormProps) {
-  const { text, set, errors, shown, submit } = useTextForm(() => playerFormText(player), parsePlayerForm, onSubmit, error);
+  const unit = useMe().lengthUnit;
+  const { text, set, errors, shown, submit } = useTextForm(() => playerFormText(player, unit), (t) => parsePlayerForm(t, unit), onSubmit, error);
 
   return (
     <View style={styles.form}>
@@ -45,10 +47,10 @@ export function PlayerForm({ player, submitTitle, busy, error, onSubmit, onCance
       />
       <ChoiceField label="Plays" value={text.handedness} options={HANDEDNESS} onChange={set('handedness')} />
       <FormRow>
-        <TextField label="Height" suffix="cm" value={text.heightCm} onChangeText={set('heightCm')} error={shown.heightCm} inputMode="decimal" />
+        <TextField label="Height" suffix={unit} value={text.heightCm} onChangeText={set('heightCm')} error={shown.heightCm} inputMode="decimal" />
         <TextField
           label="Wrist to floor"
-          suffix="cm"
+          suffix={unit}
           value={text.wristToFloorCm}
           onChangeText={set('wristToFloorCm')}
           error={shown.wristToFloorCm}

@@ -1,3 +1,4 @@
+import type { PlayerSort } from '@/server/schemas';
 import { useRouter } from 'expo-router';
 import type { ReactNode } from 'react';
 import { usePlayersQuery } from '../queries/players';
@@ -7,12 +8,12 @@ import { LoadingState } from '../ui/loading-state';
 import { ResponsiveGrid } from '../ui/responsive-grid';
 import { PlayerRow } from './player-row';
 
-type PlayerListProps = { search: string; emptyAction?: ReactNode };
+type PlayerListProps = { search: string; emptyAction?: ReactNode; sort?: PlayerSort; showArchived?: boolean };
 
 /** The shop's players matching a search, with loading, error and empty states. */
-export function PlayerList({ search, emptyAction }: PlayerListProps) {
+export function PlayerList({ search, emptyAction, sort = 'name-asc', showArchived = false }: PlayerListProps) {
   const router = useRouter();
-  const query = usePlayersQuery({ q: search.trim() || undefined });
+  const query = usePlayersQuery({ q: search.trim() || undefined, sort, archived: showArchived ? 'show' : 'hide' });
   if (query.isPending) return <LoadingState label="Loading players…" />;
   if (query.isError) return <ErrorState error={query.error} onRetry={() => void query.refetch()} />;
   if (query.data.length === 0) {

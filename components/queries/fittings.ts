@@ -10,7 +10,7 @@ export const fittingKeys = {
 };
 
 export const getFittings = (f: FittingFilters) =>
-  api.get<Fitting[]>('/fittings', { playerId: f.playerId, q: f.q?.trim() || undefined, from: f.from, to: f.to, sort: f.sort, step: f.step });
+  api.get<Fitting[]>('/fittings', { playerId: f.playerId, q: f.q?.trim() || undefined, from: f.from, to: f.to, sort: f.sort, step: f.step, archived: f.archived });
 export const getFitting = (id: string) => api.get<Fitting>(`/fittings/${encodeURIComponent(id)}`);
 
 export const fittingsQuery = (f: FittingFilters) =>

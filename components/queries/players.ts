@@ -9,7 +9,7 @@ export const playerKeys = {
   detail: (id: string) => [...playerKeys.all, 'detail', id] as const,
 };
 
-export const getPlayers = (f: PlayerFilters) => api.get<Player[]>('/players', { q: f.q });
+export const getPlayers = (f: PlayerFilters) => api.get<Player[]>('/players', { q: f.q, archived: f.archived, sort: f.sort });
 export const getPlayer = (id: string) => api.get<Player>(`/players/${encodeURIComponent(id)}`);
 
 export const playersQuery = (f: PlayerFilters) =>
@@ -47,19 +47,6 @@ export function useUpdatePlayerMutation(id: string) {
         queryClient.invalidateQueries({ queryKey: playerKeys.all }),
         queryClient.invalidateQueries({ queryKey: fittingKeys.all }),
       ]);
-    },
-  });
-}
-
-/** Gives the player a sign-in of their own (e-mail and first password). */
-export function useGivePlayerAccountMutation(id: string) {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: (body: { email: string; password: string }) =>
-      api.post<Player>(`/players/${encodeURIComponent(id)}/account`, body),
-    onSuccess: (player) => {
-      queryClient.setQueryData(playerKeys.detail(id), player);
-      return queryClient.invalidateQueries({ queryKey: playerKeys.all });
     },
   });
 }

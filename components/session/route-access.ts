@@ -43,6 +43,7 @@ export const ROUTE_ACCESS: Readonly<Record<string, readonly Role[]>> = {
   '/fittings/[id]/spec-sheet': EVERYONE,
   '/spec-sheets/[id]': EVERYONE,
   '/workshop-settings': STAFF,
+  '/shop': OWNER,
 };
 
 /**

@@ -12,6 +12,8 @@ type RouteGuardProps = { routeName: string; children: ReactNode };
 export function RouteGuard({ routeName, children }: RouteGuardProps): ReactElement {
   const me = useMe();
   if (!mayOpenRoute(me.role, routeName)) return <Redirect href="/" />;
+  // a closed shop's owner may open only the shop page (the server refuses the rest)
+  if (me.shop.closedAt && routeName !== 'shop' && routeName !== 'index') return <Redirect href="/shop" />;
   return <>{children}</>;
 }
 

@@ -10,6 +10,7 @@ import { TextField } from '../ui/text-field';
 import { space } from '../theme';
 import { AuthLink } from './auth-link';
 import { DEMO_SIGN_IN, DemoHint } from './demo-hint';
+import { ResendLink } from './resend-link';
 import { useSignInMutation } from './use-sign-in';
 
 type SignInFormProps = {
@@ -20,6 +21,7 @@ type SignInFormProps = {
 
 function bannerFor(error: unknown): string {
   if (error instanceof ApiError && error.code === 'BAD_CREDENTIALS') return 'That e-mail and password do not match. Check both and try again.';
+  if (error instanceof ApiError && error.code === 'EMAIL_NOT_VERIFIED') return 'Confirm your e-mail address first: open the link we sent you.';
   return errorMessage(error);
 }
 
@@ -61,6 +63,7 @@ export function SignInForm({ onSignedIn, demo = false }: SignInFormProps) {
         Sign in
       </AppText>
       {signIn.error ? <Notice tone="danger">{bannerFor(signIn.error)}</Notice> : null}
+      {signIn.error instanceof ApiError && signIn.error.code === 'EMAIL_NOT_VERIFIED' ? <ResendLink email={email.trim().toLowerCase()} /> : null}
       <TextField
         label="E-mail"
         value={email}
@@ -84,6 +87,7 @@ export function SignInForm({ onSignedIn, demo = false }: SignInFormProps) {
       />
       <Button title="Sign in" onPress={submit} busy={signIn.isPending} />
       <AuthLink href="/forgot">Forgot your password?</AuthLink>
+      <AuthLink href="/sign-up">New shop? Start here</AuthLink>
       {demo ? <DemoHint /> : null}
     </View>
   );

@@ -34,6 +34,7 @@ export const ROUTE_TITLES: Readonly<Record<string, string>> = {
   '/workshop-settings': 'Workshop settings',
   '/fittings/[id]/intake': 'Intake',
   '/fittings/[id]/messages': 'Messages',
+  '/shop': 'Shop',
 };
 
 /**

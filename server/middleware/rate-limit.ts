@@ -70,6 +70,10 @@ export interface RateLimits {
   failedByAccount: RateLimiterAbstract;
   /** Reset e-mails asked per account. */
   resetsByAccount: RateLimiterAbstract;
+  /** Sign-up, confirmation and invitation e-mails per recipient address. */
+  mailsByRecipient: RateLimiterAbstract;
+  /** Invitation e-mails (new and sent again) per shop. */
+  invitationsByShop: RateLimiterAbstract;
 }
 
 /** The limiters of one app, on its database (the `rate_limits` table of migration 0006). */
@@ -88,6 +92,8 @@ export function createRateLimits(sequelize: Sequelize, config: Config): RateLimi
     byAddress: new RateLimiterMySQL({ ...common, keyPrefix: 'addr', points: config.signIn.limit }),
     failedByAccount: new RateLimiterMySQL({ ...common, keyPrefix: 'acct', points: config.signIn.accountLimit }),
     resetsByAccount: new RateLimiterMySQL({ ...common, keyPrefix: 'reset', points: Math.max(3, Math.ceil(config.signIn.accountLimit / 2)) }),
+    mailsByRecipient: new RateLimiterMySQL({ ...common, keyPrefix: 'mailto', points: Math.max(3, Math.ceil(config.signIn.accountLimit / 2)) }),
+    invitationsByShop: new RateLimiterMySQL({ ...common, keyPrefix: 'invite', points: Math.max(30, config.signIn.limit * 3) }),
   };
 }
 

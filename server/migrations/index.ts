@@ -7,6 +7,7 @@ import * as m0006 from './0006-hardening';
 import * as m0005 from './0005-ground-firmness';
 import * as m0007 from './0007-bags-spec-sheets';
 import * as m0008 from './0008-fitting-revision';
+import * as m0009 from './0009-shops-invitations';
 import * as m0010 from './0010-remote-fitting';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
@@ -21,6 +22,6 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '0006-hardening', ...m0006 },
   { name: '0007-bags-spec-sheets', ...m0007 },
   { name: '0008-fitting-revision', ...m0008 },
-  // 0009: the shops' sign-up and invitations (another branch)
+  { name: '0009-shops-invitations', ...m0009 },
   { name: '0010-remote-fitting', ...m0010 },
 ];

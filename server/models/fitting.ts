@@ -22,6 +22,8 @@ export class Fitting extends Model<InferAttributes<Fitting>, InferCreationAttrib
   declare revision: CreationOptional<number>;
   /** Where the fitting stands (migration 0010; server/services/fitting-course.ts moves it). */
   declare courseStep: CreationOptional<CourseStep>;
+  /** Hidden from lists unless asked for. */
+  declare archivedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -47,6 +49,7 @@ export class Fitting extends Model<InferAttributes<Fitting>, InferCreationAttrib
           allowNull: false,
           defaultValue: 'in-progress',
         },
+        archivedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -3,6 +3,8 @@ import { BagClub } from './bag-club';
 import { BagClubHistory } from './bag-club-history';
 import { BayFile } from './bay-file';
 import { Build } from './build';
+import { EmailVerification } from './email-verification';
+import { Invitation } from './invitation';
 import { ChosenBuild, ChosenBuildConfirmation, ChosenTakeOut } from './chosen-build';
 import { Fitting } from './fitting';
 import { FittingCourseStep, FittingIntake, FittingMessageRead, FittingMessageRecord, initRemoteFittingModels, ShopRequestLink } from './fitting-course';
@@ -18,6 +20,7 @@ import { WorkshopSettingsRecord } from './workshop-settings';
 
 export { BayFile, Build, Fitting, PasswordReset, Player, Recipe, Session, Shop, ShopMargins, User };
 export { FittingCourseStep, FittingIntake, FittingMessageRead, FittingMessageRecord, ShopRequestLink };
+export { EmailVerification, Invitation };
 export { BagClub, BagClubHistory, ChosenBuild, ChosenBuildConfirmation, ChosenTakeOut, SpecSheetRecord, WorkshopSettingsRecord };
 
 /** Registers every model and association on one Sequelize instance. */
@@ -34,6 +37,8 @@ export function initModels(sequelize: Sequelize): void {
   ShopMargins.initModel(sequelize);
   Session.initModel(sequelize);
   initRemoteFittingModels(sequelize);
+  EmailVerification.initModel(sequelize);
+  Invitation.initModel(sequelize);
 
   Shop.hasMany(User, { foreignKey: 'shopId' });
   User.belongsTo(Shop, { foreignKey: 'shopId', as: 'shop' });
@@ -53,6 +58,10 @@ export function initModels(sequelize: Sequelize): void {
   PasswordReset.belongsTo(User, { foreignKey: 'userId' });
   User.hasMany(Session, { foreignKey: 'userId' });
   Session.belongsTo(User, { foreignKey: 'userId' });
+  EmailVerification.belongsTo(User, { foreignKey: 'userId' });
+  Invitation.belongsTo(Shop, { foreignKey: 'shopId', as: 'shop' });
+  Invitation.belongsTo(Player, { foreignKey: 'playerId', as: 'player' });
+  Invitation.belongsTo(User, { foreignKey: 'invitedBy', as: 'inviter' });
   Shop.hasMany(Recipe, { foreignKey: 'shopId' });
   Recipe.belongsTo(Shop, { foreignKey: 'shopId' });
   Recipe.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });

@@ -15,6 +15,8 @@ export class Player extends Model<InferAttributes<Player>, InferCreationAttribut
   declare handicap: number | null;
   declare usualMiss: string | null;
   declare goals: string | null;
+  /** Hidden from lists unless asked for. */
+  declare archivedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -30,6 +32,7 @@ export class Player extends Model<InferAttributes<Player>, InferCreationAttribut
         handicap: { type: DataTypes.DOUBLE, allowNull: true },
         usualMiss: { type: DataTypes.STRING(200), allowNull: true },
         goals: { type: DataTypes.TEXT, allowNull: true },
+        archivedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -12,6 +12,12 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare units: CreationOptional<'imperial' | 'metric'>;
   /** Raised to end every session of this user at once. */
   declare tokenVersion: CreationOptional<number>;
+  /** When the address was confirmed by its link; an owner who signed up cannot sign in before. */
+  declare emailVerifiedAt: CreationOptional<Date | null>;
+  /** Per-quantity units; null follows `units`. */
+  declare lengthUnit: CreationOptional<'in' | 'cm' | null>;
+  declare altitudeUnit: CreationOptional<'ft' | 'm' | null>;
+  declare temperatureUnit: CreationOptional<'f' | 'c' | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -26,6 +32,11 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
         units: { type: DataTypes.ENUM('imperial', 'metric'), allowNull: false, defaultValue: 'imperial' },
         tokenVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        // people made by staff, the demo or an accepted invitation are verified on creation
+        emailVerifiedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: DataTypes.NOW },
+        lengthUnit: { type: DataTypes.ENUM('in', 'cm'), allowNull: true, defaultValue: null },
+        altitudeUnit: { type: DataTypes.ENUM('ft', 'm'), allowNull: true, defaultValue: null },
+        temperatureUnit: { type: DataTypes.ENUM('f', 'c'), allowNull: true, defaultValue: null },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

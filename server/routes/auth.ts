@@ -1,8 +1,11 @@
-import { Router, type CookieOptions, type Request } from 'express';
+import { Router, type CookieOptions, type Request, type Response } from 'express';
 import type { Config } from '../config';
 import { actorOf, authenticate } from '../middleware/authenticate';
 import { consumeOrRefuse, limitByAddress, refuseWhenSpent, type RateLimits } from '../middleware/rate-limit';
-import { forgotBodySchema, resetBodySchema, signInBodySchema, updateMeBodySchema } from '../schemas';
+import { acceptInvitationBodySchema, forgotBodySchema, invitationTokenBodySchema, resendVerificationBodySchema, resetBodySchema, signInBodySchema, signUpBodySchema, updateMeBodySchema, verifyBodySchema } from '../schemas';
+import { acceptInvitation, previewInvitation } from '../services/invitations';
+import { resendVerification, signUp, verifyEmail } from '../services/sign-up';
+import type { User } from '../models';
 import type { Mailer } from '../services/mailer';
 import { requestPasswordReset, resetPassword } from '../services/password-resets';
 import { describeMe, loadActor, signIn, signOutEverywhere, updateUnits } from '../services/auth';
@@ -19,6 +22,16 @@ export function secureCookies(config: Config, req: Request): boolean {
 export function authRouter(config: Config, mailer: Mailer, limits: RateLimits): Router {
   const router = Router();
   const cookie = (req: Request): CookieOptions => ({ httpOnly: true, secure: secureCookies(config, req), sameSite: 'strict', path: '/api' });
+  /** A new session for a user: the cookie set, their description answered. */
+  const startSignedIn = async (req: Request, res: Response, user: User) => {
+    const ttl = ttlMs(config.jwt.ttl);
+    await pruneSessions(user.id);
+    const session = await startSession(user.id, ttl);
+    const token = signSessionToken(config, { sub: user.id, ver: user.tokenVersion, sid: session.id });
+    res.cookie(SESSION_COOKIE, token, { ...cookie(req), maxAge: ttl });
+    const actor = await loadActor(user.id, user.tokenVersion, session.id);
+    return describeMe(actor!);
+  };
   const tokenOf = (req: Request): string | undefined => {
     const header = req.get('authorization');
     if (header?.startsWith('Bearer ')) return header.slice(7).trim();
@@ -39,13 +52,39 @@ export function authRouter(config: Config, mailer: Mailer, limits: RateLimits): 
       throw err;
     }
     await limits.failedByAccount.delete(account);
-    const ttl = ttlMs(config.jwt.ttl);
-    await pruneSessions(user.id);
-    const session = await startSession(user.id, ttl);
-    const token = signSessionToken(config, { sub: user.id, ver: user.tokenVersion, sid: session.id });
-    res.cookie(SESSION_COOKIE, token, { ...cookie(req), maxAge: ttl });
-    const actor = await loadActor(user.id, user.tokenVersion, session.id);
-    res.json({ user: await describeMe(actor!) });
+    res.json({ user: await startSignedIn(req, res, user) });
+  });
+
+  // A new shop and its owner; the same answer whether or not the address has an account.
+  router.post('/auth/sign-up', limitByAddress(limits, 'sign-ups from your address'), async (req, res) => {
+    const body = signUpBodySchema.parse(req.body);
+    await consumeOrRefuse(limits.mailsByRecipient, body.email, 'messages to that address', res);
+    await signUp(body, config.appUrl, mailer);
+    res.status(202).json({ sent: true });
+  });
+
+  router.post('/auth/verify', limitByAddress(limits, 'requests from your address'), async (req, res) => {
+    await verifyEmail(verifyBodySchema.parse(req.body).token);
+    res.status(204).end();
+  });
+
+  // The same answer whether or not an unconfirmed account has that address.
+  router.post('/auth/verify/resend', limitByAddress(limits, 'requests from your address'), async (req, res) => {
+    const { email } = resendVerificationBodySchema.parse(req.body);
+    await consumeOrRefuse(limits.mailsByRecipient, email, 'messages to that address', res);
+    await resendVerification(email, config.appUrl, mailer);
+    res.status(204).end();
+  });
+
+  router.post('/auth/invitation', limitByAddress(limits, 'requests from your address'), async (req, res) => {
+    res.json(await previewInvitation(invitationTokenBodySchema.parse(req.body).token));
+  });
+
+  // Sets the invited person's password and signs them in.
+  router.post('/auth/invitation/accept', limitByAddress(limits, 'requests from your address'), async (req, res) => {
+    const { token, password } = acceptInvitationBodySchema.parse(req.body);
+    const user = await acceptInvitation(token, password);
+    res.status(201).json({ user: await startSignedIn(req, res, user) });
   });
 
   // Signing out ends this session on the server (a copy of the token stops working) and clears
@@ -90,7 +129,7 @@ export function authRouter(config: Config, mailer: Mailer, limits: RateLimits): 
 
   router.patch('/me', authenticate(config), async (req, res) => {
     const body = updateMeBodySchema.parse(req.body);
-    await updateUnits(actorOf(res), body.units);
+    await updateUnits(actorOf(res), body);
     res.json(await describeMe(actorOf(res)));
   });
 

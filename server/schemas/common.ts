@@ -1,6 +1,10 @@
 import { z } from 'zod';
 
 export const idSchema = z.uuid();
+
+/** Which archived records a list shows: none (default), all with the rest, or only them. */
+export const archivedFilterSchema = z.enum(['hide', 'show', 'only'], { message: 'Archived is hide, show or only.' });
+export type ArchivedFilter = z.infer<typeof archivedFilterSchema>;
 export const idParamsSchema = z.object({ id: idSchema });
 
 export const roleSchema = z.enum(['owner', 'fitter', 'player']);

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { archivedFilterSchema } from './common';
 import { optionalText } from './common';
 import { courseStepSchema } from './fitting-course';
 
@@ -50,6 +51,8 @@ export const fittingSchema = z.object({
   ball: z.string().nullable(),
   notes: z.string().nullable(),
   remote: z.boolean(),
+  /** Hidden from lists unless asked for. */
+  archived: z.boolean().default(false),
   shotCount: z.number(),
   /** Where the fitting stands (its course). */
   courseStep: courseStepSchema,
@@ -77,6 +80,8 @@ export const fittingListQuerySchema = z
     sort: fittingSortSchema.default('date-desc'),
     /** Only fittings at this step of their course. */
     step: courseStepSchema.optional(),
+    /** Archived fittings: hidden (default), shown with the rest, or only them. */
+    archived: archivedFilterSchema.default('hide'),
   })
   .refine((f) => !f.from || !f.to || f.from <= f.to, { path: ['to'], message: 'To is on or after From.' });
 /** What a list asks for (sort optional: newest first). */

@@ -12,3 +12,4 @@ export * from './spec-sheets';
 export * from './workshop-settings';
 export * from './shop-margins';
 export * from './fitting-course';
+export * from './shops';

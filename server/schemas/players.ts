@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { optionalText } from './common';
+import { archivedFilterSchema, optionalText } from './common';
 
 export const handednessSchema = z.enum(['right', 'left']);
 
@@ -41,13 +41,22 @@ export const playerSchema = z.object({
   usualMiss: z.string().nullable(),
   goals: z.string().nullable(),
   hasAccount: z.boolean(),
+  /** Hidden from lists unless asked for. */
+  archived: z.boolean().default(false),
   fittingCount: z.number().optional(),
   createdAt: z.string(),
   updatedAt: z.string(),
 });
 export type Player = z.infer<typeof playerSchema>;
 
+export const playerSortSchema = z.enum(['name-asc', 'name-desc', 'newest', 'oldest'], { message: 'Sort is name-asc, name-desc, newest or oldest.' });
+export type PlayerSort = z.infer<typeof playerSortSchema>;
+
+/** GET /api/players query: a search in name and e-mail, the archived filter and the order. */
 export const playerListQuerySchema = z.object({
-  q: z.string().trim().max(100).optional(),
+  q: z.string().trim().max(100, 'Search with at most 100 characters.').optional(),
+  archived: archivedFilterSchema.default('hide'),
+  sort: playerSortSchema.default('name-asc'),
 });
-export type PlayerFilters = z.infer<typeof playerListQuerySchema>;
+export type PlayerListQuery = z.output<typeof playerListQuerySchema>;
+export type PlayerFilters = z.input<typeof playerListQuerySchema>;

@@ -10,6 +10,8 @@ export interface Actor {
   playerId: string | null;
   /** Display units of the user (stray reasons and other server-written text). */
   units: 'imperial' | 'metric';
+  /** The owner of a closed shop: may only see the shop, reopen it and export it. */
+  shopClosed?: boolean;
 }
 
 export const isStaff = (actor: Actor) => actor.role === 'owner' || actor.role === 'fitter';

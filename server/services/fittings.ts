@@ -6,7 +6,7 @@ import type { Fitting, FittingListQuery, fittingBodySchema, fittingUpdateSchema 
 import { type Actor, isStaff, requireStaff } from './actor';
 import { bumpFittingRevision } from './fitting-revision';
 import { notFoundAs } from './not-found';
-import { findVisiblePlayer } from './players';
+import { archivedWhere, findVisiblePlayer } from './players';
 import { countShotsByFitting } from './shot-store';
 import { recordStep } from './fitting-course';
 import { unreadCounts } from './fitting-messages';
@@ -35,6 +35,7 @@ export function toFitting(f: FittingModel, shotCount = 0, unreadMessages = 0): F
     ball: f.ball,
     notes: f.notes,
     remote: f.remote,
+    archived: f.archivedAt != null,
     shotCount,
     courseStep: f.courseStep,
     unreadMessages,
@@ -70,6 +71,8 @@ export async function listFittings(actor: Actor, filters: FittingListQuery): Pro
     where.push({ date: range });
   }
   if (filters.step) where.push({ courseStep: filters.step });
+  const archived = archivedWhere(filters.archived ?? 'hide');
+  if (archived) where.push(archived as WhereOptions<FittingModel>);
   if (filters.q) where.push({ '$player.name$': { [Op.like]: containsPattern(filters.q) } } as WhereOptions<FittingModel>);
   const fittings = await FittingModel.findAll({ where: { [Op.and]: where }, include, order: ORDER[filters.sort], limit: 500 });
   const ids = fittings.map((f) => f.id);

@@ -1,7 +1,7 @@
 import { Op, type WhereOptions } from 'sequelize';
 import { notFound } from '../errors';
 import { Fitting, Player as PlayerModel } from '../models';
-import type { Player, PlayerFilters, playerBodySchema, playerUpdateSchema } from '../schemas';
+import type { ArchivedFilter, Player, PlayerListQuery, PlayerSort, playerBodySchema, playerUpdateSchema } from '../schemas';
 import type { z } from 'zod';
 import { type Actor, isStaff, requireStaff } from './actor';
 
@@ -18,6 +18,7 @@ export function toPlayer(p: PlayerModel, fittingCount?: number): Player {
     usualMiss: p.usualMiss,
     goals: p.goals,
     hasAccount: p.userId != null,
+    archived: p.archivedAt != null,
     ...(fittingCount === undefined ? {} : { fittingCount }),
     createdAt: p.createdAt.toISOString(),
     updatedAt: p.updatedAt.toISOString(),
@@ -30,12 +31,26 @@ export function visiblePlayers(actor: Actor): WhereOptions<PlayerModel> {
   return { shopId: actor.shopId, id: actor.playerId ?? '00000000-0000-0000-0000-000000000000' };
 }
 
-export async function listPlayers(actor: Actor, filters: PlayerFilters): Promise<Player[]> {
+/** Where-clause of a list's archived filter (players and fittings both have archived_at). */
+export function archivedWhere(filter: ArchivedFilter): WhereOptions | null {
+  if (filter === 'show') return null;
+  return { archivedAt: filter === 'only' ? { [Op.ne]: null } : null };
+}
+
+const PLAYER_ORDER: Record<PlayerSort, [string, 'ASC' | 'DESC'][]> = {
+  'name-asc': [['name', 'ASC']],
+  'name-desc': [['name', 'DESC']],
+  newest: [['createdAt', 'DESC'], ['name', 'ASC']],
+  oldest: [['createdAt', 'ASC'], ['name', 'ASC']],
+};
+
+export async function listPlayers(actor: Actor, filters: PlayerListQuery): Promise<Player[]> {
   const like = filters.q ? `%${filters.q.replace(/[%_\\]/g, '\\$&')}%` : null;
-  const where: WhereOptions<PlayerModel> = like
-    ? { [Op.and]: [visiblePlayers(actor), { [Op.or]: [{ name: { [Op.like]: like } }, { email: { [Op.like]: like } }] }] }
-    : visiblePlayers(actor);
-  const players = await PlayerModel.findAll({ where, order: [['name', 'ASC']], limit: 500 });
+  const where: WhereOptions<PlayerModel>[] = [visiblePlayers(actor)];
+  if (like) where.push({ [Op.or]: [{ name: { [Op.like]: like } }, { email: { [Op.like]: like } }] });
+  const archived = archivedWhere(filters.archived ?? 'hide');
+  if (archived) where.push(archived as WhereOptions<PlayerModel>);
+  const players = await PlayerModel.findAll({ where: { [Op.and]: where }, order: PLAYER_ORDER[filters.sort ?? 'name-asc'], limit: 500 });
   const counts = (await Fitting.count({
     where: { playerId: players.map((p) => p.id) },
     group: ['playerId'],

@@ -1,11 +1,10 @@
 import type { z } from 'zod';
 import { HttpError, notFound } from '../errors';
 import { User } from '../models';
-import type { TeamMember, playerAccountBodySchema, teamMemberBodySchema, teamMemberUpdateSchema } from '../schemas';
+import type { TeamMember, teamMemberBodySchema, teamMemberUpdateSchema } from '../schemas';
 import { type Actor, requireOwner, requireStaff } from './actor';
 import { assertStrongPassword } from './password-strength';
 import { hashPassword } from './passwords';
-import { findVisiblePlayer } from './players';
 
 const toMember = (u: User): TeamMember => ({
   id: u.id,
@@ -52,23 +51,4 @@ export async function updateFitter(actor: Actor, id: string, body: z.output<type
   }
   await user.save();
   return toMember(user);
-}
-
-/** Gives a player profile its own sign-in (role player). */
-export async function createPlayerAccount(actor: Actor, playerId: string, body: z.output<typeof playerAccountBodySchema>): Promise<void> {
-  requireStaff(actor);
-  const player = await findVisiblePlayer(actor, playerId);
-  if (player.userId) throw new HttpError(409, 'HAS_ACCOUNT', 'This player already has a sign-in.');
-  assertStrongPassword(body.password, [body.email, player.name]);
-  await ensureEmailFree(body.email);
-  const user = await User.create({
-    shopId: actor.shopId,
-    email: body.email,
-    name: player.name,
-    role: 'player',
-    passwordHash: await hashPassword(body.password),
-  });
-  player.userId = user.id;
-  if (!player.email) player.email = body.email;
-  await player.save();
 }

@@ -17,7 +17,7 @@ const EMAIL: Record<Role, string> = {
   fitter: 'oskar@larchmere.example',
   player: 'nell.tarrant@example.net',
 };
-const HOME: Record<Role, string> = { owner: '/players', fitter: '/players', player: '/my-fittings' };
+const HOME: Record<Role, string> = { owner: '/players', fitter: '/fittings', player: '/my-fittings' };
 
 type Row = {
   /** The address, with the demo's ids filled in. */
@@ -61,7 +61,7 @@ function screens(ids: Awaited<ReturnType<typeof demoIds>>): Row[] {
     { path: '/players/new', title: 'New player', shown: STAFF },
     { path: `/players/${ids.nell}`, title: 'Nell Tarrant', shown: ALL },
     { path: `/players/${ids.nell}/edit`, title: 'Edit Nell Tarrant', shown: STAFF },
-    { path: `/players/${ids.amos}/account`, title: 'Give sign-in', shown: STAFF },
+    { path: `/players/${ids.amos}/account`, title: 'Invite to sign in', shown: STAFF },
     { path: '/fittings', title: 'Fittings', shown: STAFF },
     { path: '/fittings/new', title: 'New fitting', shown: STAFF },
     { path: `/fittings/${ids.fitting}`, title: /Nell Tarrant/, shown: ALL, measure: false },
@@ -74,7 +74,8 @@ function screens(ids: Awaited<ReturnType<typeof demoIds>>): Row[] {
     { path: `/builds/${ids.build}/edit`, title: 'Edit build', shown: STAFF },
     { path: '/my-fittings', title: 'My fittings', shown: ['player'] },
     { path: '/team', title: 'Team', shown: ['owner'] },
-    { path: '/team/new', title: 'Add fitter', shown: ['owner'] },
+    { path: '/team/new', title: 'Invite a fitter', shown: ['owner'] },
+    { path: '/shop', title: 'Larchmere Fitting Barn', shown: ['owner'] },
     { path: '/recipes', title: 'Import recipes', shown: ['owner'] },
     { path: `/recipes/${ids.recipe}`, title: 'Bay 1 export', shown: ['owner'] },
     { path: '/account', title: 'Account', shown: ALL },

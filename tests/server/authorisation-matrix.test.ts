@@ -23,6 +23,7 @@ import { buildFitting, buildPlayer, buildShop, buildUser } from '@/fixtures/buil
 import { BayFile, Build, ChosenBuild, type Fitting, type Player, Recipe, Session, type Shop, ShopRequestLink, type User } from '@/server/models';
 import type { Mailer } from '@/server/services/mailer';
 import { insertShots } from '@/server/services/shot-store';
+import { invitePlayer } from '@/server/services/invitations';
 import { sendSpecSheet } from '@/server/services/spec-sheets';
 import { signSessionToken } from '@/server/services/tokens';
 import { listRoutes } from '../support/route-list';
@@ -57,6 +58,12 @@ const ROWS: Record<string, Row> = {
   'POST /api/auth/forgot': { expect: [204, 204, 204, 204, 204, 204, 204], send: (req) => req.send({ email: `nobody-${unique()}@test.example` }) },
   'POST /api/auth/reset': { expect: [400, 400, 400, 400, 400, 400, 400], send: json({ token: 'x'.repeat(40), password: STRONG }) },
   'POST /api/auth/sign-out-everywhere': { expect: [401, 204, 204, 204, 204, 204, 204], write: true },
+  // a new shop per call; the same answer for an address that has an account
+  'POST /api/auth/sign-up': { expect: [202, 202, 202, 202, 202, 202, 202], send: (req) => req.send({ shopName: 'Fen Road Fitting', name: 'Odile Marsh', email: `signup-${unique()}@test.example`, password: STRONG }), write: true },
+  'POST /api/auth/verify': { expect: [400, 400, 400, 400, 400, 400, 400], send: json({ token: 'x'.repeat(43) }) },
+  'POST /api/auth/verify/resend': { expect: [204, 204, 204, 204, 204, 204, 204], send: (req) => req.send({ email: `nobody-${unique()}@test.example` }) },
+  'POST /api/auth/invitation': { expect: [400, 400, 400, 400, 400, 400, 400], send: json({ token: 'x'.repeat(43) }) },
+  'POST /api/auth/invitation/accept': { expect: [400, 400, 400, 400, 400, 400, 400], send: json({ token: 'x'.repeat(43), password: STRONG }), write: true },
   'GET /api/me': { expect: [401, 200, 200, 200, 200, 200, 200] },
   'PATCH /api/me': { expect: [401, 200, 200, 200, 200, 200, 200], send: json({ units: 'metric' }), write: true },
 
@@ -64,18 +71,30 @@ const ROWS: Record<string, Row> = {
   'POST /api/players': { expect: [401, 403, 403, 201, 201, 201, 201], send: json({ name: 'Ida Morrow' }), write: true },
   'GET /api/players/:id': { expect: [401, 200, 404, 200, 200, 404, 404], params: (w) => ({ id: w.playerA.id }) },
   'PATCH /api/players/:id': { expect: [401, 403, 403, 200, 200, 404, 404], params: (w) => ({ id: w.playerA.id }), send: (req) => req.send({ handicap: next() % 50 }), write: true },
-  'POST /api/players/:id/account': {
+  'PUT /api/players/:id/archived': { expect: [401, 403, 403, 200, 200, 404, 404], params: async (w) => ({ id: (await buildPlayer(w.shopA)).id }), send: json({ archived: true }), write: true },
+  'DELETE /api/players/:id': { expect: [401, 403, 403, 204, 204, 404, 404], params: async (w) => ({ id: (await buildPlayer(w.shopA)).id }), write: true },
+  // everything the shop holds about a player: the player themselves and staff
+  'GET /api/players/:id/export': { expect: [401, 200, 404, 200, 200, 404, 404], params: (w) => ({ id: w.playerA.id }) },
+  'GET /api/players/:id/invitations': { expect: [401, 403, 403, 200, 200, 404, 404], params: (w) => ({ id: w.playerA.id }) },
+  'POST /api/players/:id/invitations': {
     expect: [401, 403, 403, 201, 201, 404, 404],
     params: async (w) => ({ id: (await buildPlayer(w.shopA)).id }),
-    send: (req) => req.send({ email: `new-${unique()}@test.example`, password: STRONG }),
+    send: (req) => req.send({ email: `invited-${unique()}@test.example` }),
     write: true,
   },
+  // a fresh open invitation of a player of shop A per call (staff may manage those)
+  'POST /api/invitations/:id/resend': { expect: [401, 403, 403, 200, 200, 404, 404], params: async (w) => ({ id: (await openInvitation(w)).id }), write: true },
+  'DELETE /api/invitations/:id': { expect: [401, 403, 403, 204, 204, 404, 404], params: async (w) => ({ id: (await openInvitation(w)).id }), write: true },
+  'PUT /api/fittings/:id/archived': { expect: [401, 403, 403, 200, 200, 404, 404], params: async (w) => ({ id: (await buildFitting(w.shopA, w.playerA, w.fitterA)).id }), send: json({ archived: true }), write: true },
+  'DELETE /api/fittings/:id': { expect: [401, 403, 403, 204, 204, 404, 404], params: async (w) => ({ id: (await buildFitting(w.shopA, w.playerA, w.fitterA)).id }), write: true },
 
   'GET /api/fittings': { expect: [401, 200, 200, 200, 200, 200, 200] },
   'POST /api/fittings': { expect: [401, 403, 403, 201, 201, 400, 400], send: (req, w) => req.send({ playerId: w.playerA.id, date: '2026-11-30', venue: 'indoor' }), write: true },
   'GET /api/fittings/:id': { expect: [401, 200, 404, 200, 200, 404, 404], params: (w) => ({ id: w.fittingA.id }) },
   'PATCH /api/fittings/:id': { expect: [401, 403, 403, 200, 200, 404, 404], params: (w) => ({ id: w.fittingA.id }), send: () => null as never, write: true },
 
+  'GET /api/team/invitations': { expect: [401, 403, 403, 403, 200, 403, 200] },
+  'POST /api/team/invitations': { expect: [401, 403, 403, 403, 201, 403, 201], send: (req) => req.send({ name: 'Lark Penn', email: `fitter-${unique()}@test.example` }), write: true },
   'GET /api/team': { expect: [401, 403, 403, 200, 200, 200, 200] },
   'POST /api/team': { expect: [401, 403, 403, 403, 201, 403, 201], send: json({ name: 'Bram Oakes', email: 'placeholder', password: STRONG }), write: true },
   'PATCH /api/team/:id': { expect: [401, 403, 403, 403, 200, 403, 404], params: (w) => ({ id: w.fitterA.id }), send: () => null as never, write: true },
@@ -121,6 +140,12 @@ const ROWS: Record<string, Row> = {
   // each caller's own shop: staff read, the owner writes
   'GET /api/shop/margins': { expect: [401, 403, 403, 200, 200, 200, 200] },
   'PUT /api/shop/margins': { expect: [401, 403, 403, 403, 200, 403, 200], send: (req) => req.send({ margins: {}, fairwayWidthM: 5 + (next() % 95) }), write: true },
+  // the shop itself: staff read; the owner sets units, closes (a wrong name here: the matrix's shops stay open), reopens and exports
+  'GET /api/shop': { expect: [401, 403, 403, 200, 200, 200, 200] },
+  'PATCH /api/shop': { expect: [401, 403, 403, 403, 200, 403, 200], send: json({ defaultUnits: 'metric' }), write: true },
+  'POST /api/shop/close': { expect: [401, 403, 403, 403, 400, 403, 400], send: json({ shopName: 'Not this shop' }), write: true },
+  'POST /api/shop/reopen': { expect: [401, 403, 403, 403, 409, 403, 409], write: true },
+  'GET /api/shop/export': { expect: [401, 403, 403, 403, 200, 403, 200] },
   'GET /api/workshop-settings': { expect: [401, 403, 403, 200, 200, 200, 200] },
   'PUT /api/workshop-settings': {
     expect: [401, 403, 403, 403, 200, 403, 200],
@@ -261,6 +286,13 @@ async function requestedFitting(w: { shopA: Shop; playerA: Player; fitterA: User
 
 const quietMailer: Mailer = { async send() {} };
 
+/** A fresh open invitation to a new player of shop A (through the service, as fitter A). */
+async function openInvitation(w: { shopA: Shop; fitterA: User }) {
+  const player = await buildPlayer(w.shopA);
+  const actor = { id: w.fitterA.id, role: w.fitterA.role, shopId: w.shopA.id, playerId: null, units: w.fitterA.units };
+  return invitePlayer(actor, player.id, `open-${unique()}@test.example`, 'https://ovalyard.test', quietMailer);
+}
+
 /** A fresh spec sheet sent to player A (through the service, as fitter A). */
 async function sentSheet(w: { shopA: Shop; playerA: Player; fitterA: User }) {
   const fitting = await chosenFitting(w);
@@ -306,6 +338,7 @@ async function fingerprint(): Promise<string> {
   const rows = await ctx.sequelize.query<{ Table: string; Checksum: number | bigint }>(
     `CHECKSUM TABLE shops, users, players, fittings, bay_files, shots, builds, recipes, password_resets, shop_margins,
        bag_clubs, bag_club_history, chosen_builds, chosen_take_outs, chosen_build_confirmations, spec_sheets, workshop_settings,
+       email_verifications, invitations,
        fitting_course_steps, fitting_intakes, fitting_messages, fitting_message_reads, shop_request_links`,
     { type: QueryTypes.SELECT },
   );

@@ -39,9 +39,10 @@ export interface ServedApp {
  * The web build from dist/ and the API on a free port, over a fresh database with the demo loaded.
  * `mailer` replaces the capturing one (e.g. real SMTP to a test server on loopback).
  */
-export async function serveDemo(now = new Date(), options: { mailer?: Mailer } = {}): Promise<ServedApp> {
+export async function serveDemo(now = new Date(), options: { mailer?: Mailer; demo?: boolean } = {}): Promise<ServedApp> {
   const { sequelize, db, drop } = await createTestDatabase();
-  await seedDemo(sequelize, now);
+  // demo: false serves an empty install, as DEMO_SEED=0 does
+  if (options.demo !== false) await seedDemo(sequelize, now);
   // Listen first: the app's APP_URL (the address in e-mailed links) is this server's own address.
   const server: Server = http.createServer();
   await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
@@ -94,7 +95,7 @@ function watchCsp(browser: Browser, violations: string[]): void {
  * The served demo and a browser for one test file: started before its tests, closed after.
  * Read `.url` and `.browser` inside the tests (they are set in beforeAll).
  */
-export function useDemoInBrowser(options: { mailer?: () => Mailer } = {}): { readonly url: string; readonly browser: Browser; readonly mail: MailMessage[] } {
+export function useDemoInBrowser(options: { mailer?: () => Mailer; demo?: boolean } = {}): { readonly url: string; readonly browser: Browser; readonly mail: MailMessage[] } {
   let served: ServedApp | undefined;
   let browser: Browser | undefined;
   const cspViolations: string[] = [];
@@ -102,7 +103,7 @@ export function useDemoInBrowser(options: { mailer?: () => Mailer } = {}): { rea
     if (!fs.existsSync(path.resolve(__dirname, '../../dist/index.html'))) {
       throw new Error('No web build in dist/: run npm test (it builds), or npm run build:web');
     }
-    served = await serveDemo(new Date(), { mailer: options.mailer?.() });
+    served = await serveDemo(new Date(), { mailer: options.mailer?.(), demo: options.demo });
     browser = await launchBrowser();
     watchCsp(browser, cspViolations);
   });

@@ -1,5 +1,6 @@
 import { useRouter } from 'expo-router';
 import { SignOutButtons } from '@/components/account/sign-out-buttons';
+import { QuantityUnitsChoice } from '@/components/account/quantity-units-choice';
 import { UnitsChoice } from '@/components/account/units-choice';
 import { formatRole } from '@/components/format';
 import { useMe } from '@/components/session/session-provider';
@@ -38,6 +39,7 @@ export default function AccountScreen() {
       <Section title="Preferences">
         <Card>
           <UnitsChoice units={me.units} />
+          <QuantityUnitsChoice me={me} />
         </Card>
       </Section>
       <Section title="Sign out">

@@ -1,14 +1,14 @@
 import { Stack } from 'expo-router';
 import { useGoBack } from '@/components/navigation';
-import { TeamMemberForm } from '@/components/team/team-member-form';
+import { InviteFitterForm } from '@/components/team/invite-fitter-form';
 import { Screen } from '@/components/ui/screen';
 
-export default function AddFitterScreen() {
+export default function InviteFitterScreen() {
   const goBack = useGoBack('/team');
   return (
     <Screen>
-      <Stack.Screen options={{ title: 'Add fitter' }} />
-      <TeamMemberForm onDone={goBack} onCancel={goBack} />
+      <Stack.Screen options={{ title: 'Invite a fitter' }} />
+      <InviteFitterForm onDone={goBack} onCancel={goBack} />
     </Screen>
   );
 }

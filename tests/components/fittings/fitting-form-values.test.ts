@@ -57,3 +57,21 @@ describe('todayIsoDate', () => {
     expect(todayIsoDate(new Date(2025, 0, 5, 12))).toBe('2025-01-05');
   });
 });
+
+describe('fitting form conditions in °F and ft', () => {
+  const units = { temperature: 'f', altitude: 'ft' } as const;
+
+  it('parseFittingForm, 68 °F and 1000 ft typed, stores 20 °C and 304.8 m (NIST SP 811 (2008) B.8/B.9: 1 ft = 0.3048 m, °C = (°F − 32)/1.8)', () => {
+    const text = { ...fittingFormText(undefined, { playerId: '5b0c7a5e-4f3a-4c1e-9d2a-0e6f1b2c3d4e', today: '2026-11-30' }, units), temperatureC: '68', altitudeM: '1000' };
+    const result = parseFittingForm(text, units);
+    if (!result.ok) throw new Error(JSON.stringify(result.errors));
+    expect(result.body.temperatureC).toBeCloseTo(20, 10);
+    expect(result.body.altitudeM).toBeCloseTo(304.8, 10);
+  });
+
+  it('fittingFormText, a fitting at 100 °C and 30.48 m, shows 212 and 100', () => {
+    const text = fittingFormText({ date: '2026-11-30', temperatureC: 100, altitudeM: 30.48 } as never, {}, units);
+    expect(text.temperatureC).toBe('212');
+    expect(text.altitudeM).toBe('100');
+  });
+});

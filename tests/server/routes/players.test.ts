@@ -116,15 +116,4 @@ describe('/api/players', () => {
     expect((await agent.patch(`/api/players/${rival.player.id}`).set(APP_HEADER).send({ handicap: 1 })).status).toBe(404);
   });
 
-  it('POST /:id/account gives a player a sign-in that sees only their profile', async () => {
-    const fitter = await signedInAgent(ctx.app, world.fitter.email);
-    const created = await fitter.post('/api/players').set(APP_HEADER).send({ ...newPlayer, name: 'Ossian Vetch' });
-    const res = await fitter.post(`/api/players/${created.body.id}/account`).set(APP_HEADER).send({ email: 'ossian@test.example', password: 'long enough pw' });
-    expect(res.status).toBe(201);
-    expect(res.body.hasAccount).toBe(true);
-    const again = await fitter.post(`/api/players/${created.body.id}/account`).set(APP_HEADER).send({ email: 'ossian2@test.example', password: 'long enough pw' });
-    expect(again.status).toBe(409);
-    const player = await signedInAgent(ctx.app, 'ossian@test.example', 'long enough pw');
-    expect((await player.get('/api/players')).body.map((p: { id: string }) => p.id)).toEqual([created.body.id]);
-  });
 });

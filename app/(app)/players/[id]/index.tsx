@@ -1,3 +1,4 @@
+import { PlayerRecordActions } from '@/components/players/player-record-actions';
 import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 import { FittingList } from '@/components/fittings/fitting-list';
@@ -39,7 +40,7 @@ export default function PlayerScreen() {
             <Button title="Edit" variant="secondary" compact onPress={() => router.push({ pathname: '/players/[id]/edit', params: { id } })} />
             {player.hasAccount ? null : (
               <Button
-                title="Give sign-in"
+                title="Invite to sign in"
                 variant="secondary"
                 compact
                 onPress={() => router.push({ pathname: '/players/[id]/account', params: { id } })}
@@ -47,6 +48,9 @@ export default function PlayerScreen() {
             )}
           </View>
         ) : null}
+      </Section>
+      <Section title="Their records">
+        <PlayerRecordActions player={player} staff={staff} onDeleted={() => router.replace('/players')} />
       </Section>
       <Section title="Bag">
         <Button title={staff ? 'Open the bag' : 'Open your bag'} variant="secondary" compact onPress={() => router.push({ pathname: '/players/[id]/bag', params: { id } })} />
