@@ -46,6 +46,11 @@ export const SHOP_TABLES: readonly TableSpec[] = [
   { name: 'chosen_build_confirmations', from: viaFitting('chosen_build_confirmations', 'f.shop_id = ?'), key: 'fitting_id', page: 500 },
   { name: 'spec_sheets', from: 'SELECT t.* FROM spec_sheets t WHERE t.shop_id = ?', key: 'id', page: 20 },
   { name: 'invitations', from: 'SELECT t.* FROM invitations t WHERE t.shop_id = ?', key: 'id', page: 500, omit: SECRET },
+  { name: 'fitting_course_steps', from: 'SELECT t.* FROM fitting_course_steps t WHERE t.shop_id = ?', key: 'id', page: 500 },
+  { name: 'fitting_intakes', from: 'SELECT t.* FROM fitting_intakes t WHERE t.shop_id = ?', key: 'fitting_id', page: 500 },
+  { name: 'fitting_messages', from: 'SELECT t.* FROM fitting_messages t WHERE t.shop_id = ?', key: 'id', page: 500 },
+  { name: 'shop_request_links', from: 'SELECT t.* FROM shop_request_links t WHERE t.shop_id = ?', key: 'shop_id', page: 1 },
+  // fitting_message_reads (who read up to where) are markers, not data: left out.
 ];
 
 /** One player's records; the scope id is the player's. */
@@ -60,6 +65,9 @@ export const PLAYER_TABLES: readonly TableSpec[] = [
   { name: 'bag_clubs', from: 'SELECT t.* FROM bag_clubs t WHERE t.player_id = ?', key: 'id', page: 500 },
   { name: 'bag_club_history', from: 'SELECT t.* FROM bag_club_history t WHERE t.player_id = ?', key: 'id', page: 500 },
   { name: 'spec_sheets', from: 'SELECT t.* FROM spec_sheets t WHERE t.player_id = ?', key: 'id', page: 20 },
+  { name: 'fitting_course_steps', from: viaFitting('fitting_course_steps', 'f.player_id = ?'), key: 'id', page: 500 },
+  { name: 'fitting_intakes', from: viaFitting('fitting_intakes', 'f.player_id = ?'), key: 'fitting_id', page: 500 },
+  { name: 'fitting_messages', from: viaFitting('fitting_messages', 'f.player_id = ?'), key: 'id', page: 500 },
 ];
 
 type Row = Record<string, unknown>;
