@@ -15,16 +15,6 @@ export function useTeamQuery() {
   return useQuery(teamQuery());
 }
 
-export type NewFitter = { name: string; email: string; password: string };
-
-export function useAddFitterMutation() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: (body: NewFitter) => api.post<TeamMember>('/team', body),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: teamKeys.all }),
-  });
-}
-
 export function useUpdateTeamMemberMutation() {
   const queryClient = useQueryClient();
   return useMutation({

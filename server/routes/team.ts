@@ -1,17 +1,13 @@
 import { Router } from 'express';
 import { actorOf } from '../middleware/authenticate';
-import { idParamsSchema, teamMemberBodySchema, teamMemberUpdateSchema } from '../schemas';
-import { addFitter, listTeam, updateFitter } from '../services/team';
+import { idParamsSchema, teamMemberUpdateSchema } from '../schemas';
+import { listTeam, updateFitter } from '../services/team';
 
 export function teamRouter(): Router {
   const router = Router();
 
   router.get('/', async (_req, res) => {
     res.json(await listTeam(actorOf(res)));
-  });
-
-  router.post('/', async (req, res) => {
-    res.status(201).json(await addFitter(actorOf(res), teamMemberBodySchema.parse(req.body)));
   });
 
   router.patch('/:id', async (req, res) => {

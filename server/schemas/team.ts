@@ -1,10 +1,6 @@
 import { z } from 'zod';
 
-export const teamMemberBodySchema = z.object({
-  name: z.string().trim().min(1, 'Enter a name.').max(120),
-  email: z.string().trim().toLowerCase().pipe(z.email({ message: 'Enter an e-mail address.' })),
-  password: z.string().min(10, 'A password needs at least 10 characters.').max(200),
-});
+// Fitters join by invitation (server/services/invitations.ts): nobody sets a password for another.
 export const teamMemberUpdateSchema = z.object({
   name: z.string().trim().min(1).max(120).optional(),
   active: z.boolean().optional(),

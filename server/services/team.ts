@@ -1,7 +1,7 @@
 import type { z } from 'zod';
 import { HttpError, notFound } from '../errors';
 import { User } from '../models';
-import type { TeamMember, teamMemberBodySchema, teamMemberUpdateSchema } from '../schemas';
+import type { TeamMember, teamMemberUpdateSchema } from '../schemas';
 import { type Actor, requireOwner, requireStaff } from './actor';
 import { assertStrongPassword } from './password-strength';
 import { hashPassword } from './passwords';
@@ -18,26 +18,6 @@ export async function listTeam(actor: Actor): Promise<TeamMember[]> {
   requireStaff(actor);
   const users = await User.findAll({ where: { shopId: actor.shopId, role: ['owner', 'fitter'] }, order: [['role', 'DESC'], ['name', 'ASC']] });
   return users.map(toMember);
-}
-
-async function ensureEmailFree(email: string): Promise<void> {
-  if (await User.findOne({ where: { email }, attributes: ['id'] })) {
-    throw new HttpError(409, 'EMAIL_TAKEN', 'An account with that e-mail already exists.');
-  }
-}
-
-export async function addFitter(actor: Actor, body: z.output<typeof teamMemberBodySchema>): Promise<TeamMember> {
-  requireOwner(actor);
-  assertStrongPassword(body.password, [body.email, body.name]);
-  await ensureEmailFree(body.email);
-  const user = await User.create({
-    shopId: actor.shopId,
-    email: body.email,
-    name: body.name,
-    role: 'fitter',
-    passwordHash: await hashPassword(body.password),
-  });
-  return toMember(user);
 }
 
 export async function updateFitter(actor: Actor, id: string, body: z.output<typeof teamMemberUpdateSchema>): Promise<TeamMember> {
