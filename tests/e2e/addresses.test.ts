@@ -18,6 +18,7 @@ const EMAIL: Record<Role, string> = {
   player: 'nell.tarrant@example.net',
 };
 const HOME: Record<Role, string> = { owner: '/players', fitter: '/fittings', player: '/my-fittings' };
+const HOME_TITLE: Record<Role, string> = { owner: 'Players', fitter: 'Fittings', player: 'My fittings' };
 
 type Row = {
   /** The address, with the demo's ids filled in. */
@@ -121,7 +122,7 @@ async function visit(page: Page, url: string, row: Row, role: Role): Promise<voi
   const expected = row.shown.includes(role) ? row.path : HOME[role];
   await page.waitForURL((u) => u.pathname === expected, { timeout: 30_000 });
   if (!row.shown.includes(role)) {
-    await page.getByRole('heading', { name: role === 'player' ? 'My fittings' : 'Players', exact: true }).first().waitFor({ timeout: 30_000 });
+    await page.getByRole('heading', { name: HOME_TITLE[role], exact: true }).first().waitFor({ timeout: 30_000 });
     return;
   }
   await page.getByRole('heading', { name: row.title, exact: typeof row.title === 'string' }).first().waitFor({ timeout: 30_000 });
