@@ -1,4 +1,6 @@
 import { StyleSheet, View } from 'react-native';
+import { CM_PER_IN } from '@/analysis/units';
+import { useMe } from '../session/session-provider';
 import { space } from '../theme';
 import { FormRow } from '../ui/form-row';
 import { TextField } from '../ui/text-field';
@@ -18,6 +20,11 @@ export function SpecFields({ club, text, set, errors }: SpecFieldsProps) {
   const field = (key: keyof BuildFormText) => ({ value: text[key], onChangeText: set(key), error: errors[key] });
   const number = { inputMode: 'decimal' as const };
   const notes = lengthConformanceNotes(club, typedLengthIn(text));
+  const me = useMe();
+  const typedIn = typedLengthIn(text);
+  // Club lengths are written in inches in every workshop (common practice, no source); a user who
+  // reads lengths in cm sees the typed length in cm as well.
+  const lengthHint = me.lengthUnit === 'cm' ? `Club lengths are in inches${typedIn != null ? ` (${(typedIn * CM_PER_IN).toFixed(1)} cm)` : ''}` : undefined;
   return (
     <View style={styles.fields}>
       <TextField label="Head" {...field('head')} placeholder="Model and size, as the workshop knows it" />
@@ -33,7 +40,7 @@ export function SpecFields({ club, text, set, errors }: SpecFieldsProps) {
       </FormRow>
       <View style={styles.lengthRow}>
         <View style={styles.lengthField}>
-          <TextField label="Length" suffix="in" {...field('lengthIn')} {...number} />
+          <TextField label="Length" suffix="in" {...field('lengthIn')} {...number} hint={lengthHint} />
         </View>
         {notes.length > 0 ? (
           <View style={styles.lengthNotes} aria-live="polite">
