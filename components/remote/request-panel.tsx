@@ -33,7 +33,7 @@ export function RequestPanel({ slug }: RequestPanelProps) {
       {!me ? (
         <>
           <AppText>Sign in with the account your fitting shop gave you to ask for one.</AppText>
-          <Button title="Sign in" onPress={() => router.push('/sign-in')} />
+          <Button title="Sign in" onPress={() => router.push(`/sign-in?next=${encodeURIComponent(`/request/${slug}`)}`)} />
         </>
       ) : me.role !== 'player' ? (
         <AppText tone="muted">This page is for your shop’s players: share its address with them.</AppText>
