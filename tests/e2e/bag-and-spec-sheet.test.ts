@@ -5,40 +5,18 @@
  */
 import fs from 'node:fs';
 import path from 'node:path';
-import type { AddressInfo } from 'node:net';
-import { SMTPServer } from 'smtp-server';
 import { Build, Fitting, Player, User } from '@/server/models';
 import { createMailer } from '@/server/services/mailer';
 import { importCsv } from '@/fixtures/bag-builders';
 import { DESKTOP, PHONE, signInAs, useDemoInBrowser } from '../support/browser';
+import { useSmtpCapture } from '../support/smtp-capture';
 
 jest.setTimeout(240_000);
 
-const received: string[] = [];
-let smtp: SMTPServer;
-let smtpPort = 0;
-beforeAll(async () => {
-  smtp = new SMTPServer({
-    authOptional: true,
-    disabledCommands: ['STARTTLS', 'AUTH'],
-    logger: false,
-    onData(stream, _session, callback) {
-      let data = '';
-      stream.on('data', (chunk: Buffer) => (data += chunk.toString('utf8')));
-      stream.on('end', () => {
-        received.push(data);
-        callback();
-      });
-    },
-  });
-  await new Promise<void>((resolve) => smtp.listen(0, '127.0.0.1', resolve));
-  smtpPort = (smtp.server.address() as AddressInfo).port;
-});
-afterAll(async () => {
-  await new Promise<void>((resolve) => smtp.close(() => resolve()));
-});
+const smtp = useSmtpCapture();
+const received = smtp.received;
 
-const demo = useDemoInBrowser({ mailer: () => createMailer(`smtp://127.0.0.1:${smtpPort}/?ignoreTLS=true`, 'Ovalyard <no-reply@ovalyard.invalid>') });
+const demo = useDemoInBrowser({ mailer: () => createMailer(smtp.url(), 'Ovalyard <no-reply@ovalyard.invalid>') });
 
 // A new fitting of the invented demo player Nell Tarrant with the demo's driver and 7 iron session.
 let fittingId = '';

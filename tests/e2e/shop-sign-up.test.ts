@@ -4,39 +4,17 @@
  * exchange to a test server on loopback), invites a fitter and a player, and each accepts from
  * their own message and lands on their own start page.
  */
-import type { AddressInfo } from 'node:net';
 import type { Page } from 'playwright-core';
-import { SMTPServer } from 'smtp-server';
 import { createMailer } from '@/server/services/mailer';
 import { DESKTOP, PHONE, useDemoInBrowser } from '../support/browser';
+import { useSmtpCapture } from '../support/smtp-capture';
 
 jest.setTimeout(240_000);
 
-const received: string[] = [];
-let smtp: SMTPServer;
-let smtpPort = 0;
-beforeAll(async () => {
-  smtp = new SMTPServer({
-    authOptional: true,
-    disabledCommands: ['STARTTLS', 'AUTH'],
-    logger: false,
-    onData(stream, _session, callback) {
-      let data = '';
-      stream.on('data', (chunk: Buffer) => (data += chunk.toString('utf8')));
-      stream.on('end', () => {
-        received.push(data);
-        callback();
-      });
-    },
-  });
-  await new Promise<void>((resolve) => smtp.listen(0, '127.0.0.1', resolve));
-  smtpPort = (smtp.server.address() as AddressInfo).port;
-});
-afterAll(async () => {
-  await new Promise<void>((resolve) => smtp.close(() => resolve()));
-});
+const smtp = useSmtpCapture();
+const received = smtp.received;
 
-const site = useDemoInBrowser({ demo: false, mailer: () => createMailer(`smtp://127.0.0.1:${smtpPort}/?ignoreTLS=true`, 'Ovalyard <no-reply@ovalyard.invalid>') });
+const site = useDemoInBrowser({ demo: false, mailer: () => createMailer(smtp.url(), 'Ovalyard <no-reply@ovalyard.invalid>') });
 
 /** The message's text with quoted-printable soft line breaks and "=" undone. */
 const plain = (raw: string) => raw.replace(/=\r?\n/g, '').replace(/=3D/g, '=');
