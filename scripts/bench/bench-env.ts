@@ -77,6 +77,7 @@ export async function startBenchEnv(): Promise<BenchEnv> {
         NODE_ENV: 'production',
         HOST: '127.0.0.1',
         PORT: String(port),
+        APP_URL: `http://127.0.0.1:${port}`,
         DB_HOST: '127.0.0.1',
         DB_PORT: String(dbPort),
         DB_NAME: 'bench',
