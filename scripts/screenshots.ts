@@ -123,6 +123,8 @@ async function main(): Promise<void> {
       context = await browser.newContext({ viewport: size });
       page = await context.newPage();
       await signIn(page, 'oskar@larchmere.example');
+      await page.goto(`${BASE}/players`); // a fitter starts at the fittings
+      await page.getByLabel('Search players').waitFor();
       await shot(page, `${s}-10-players`);
       await page.getByLabel('Search players').fill('zzz');
       await page.getByText('No player matches').waitFor();

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { clubInfo } from '@/analysis/clubs';
-import type { UnitSystem } from '@/analysis/units';
+import { celsiusTo, metresTo, toCelsius, toMetres, UNIT_SYMBOL, type AltitudeUnit, type TemperatureUnit, type UnitSystem } from '@/analysis/units';
 import { formatField } from '../format-field';
 import { parseOptionalNumber } from '../forms';
 import type { AnalysisParams } from '../queries/analysis';
@@ -20,7 +20,13 @@ type CourseConditionsProps = {
   changes: readonly CourseChange[];
   busy: boolean;
   units: UnitSystem;
+  /** The user's units for altitude and temperature (the request stays in metres and °C). */
+  altitudeUnit: AltitudeUnit;
+  temperatureUnit: TemperatureUnit;
 };
+
+/** A value converted for a field: at most one decimal, none when whole. */
+const shown = (x: number | undefined, convert: (v: number) => number) => (x === undefined ? '' : String(Math.round(convert(x) * 10) / 10));
 
 const FIRMNESS = [
   { value: 'soft', label: 'Soft' },
@@ -35,9 +41,9 @@ const signed = (m: number, units: UnitSystem) => `${m >= 0 ? '+' : '−'}${forma
  * ball-flight model, and what that changed, where the fitter is looking. The strays stay the
  * measured ones.
  */
-export function CourseConditions({ value, onChange, changes, busy, units }: CourseConditionsProps) {
-  const [altitude, setAltitude] = useState(value?.altitudeM?.toString() ?? '');
-  const [temperature, setTemperature] = useState(value?.temperatureC?.toString() ?? '');
+export function CourseConditions({ value, onChange, changes, busy, units, altitudeUnit, temperatureUnit }: CourseConditionsProps) {
+  const [altitude, setAltitude] = useState(shown(value?.altitudeM, (m) => metresTo(m, altitudeUnit)));
+  const [temperature, setTemperature] = useState(shown(value?.temperatureC, (c) => celsiusTo(c, temperatureUnit)));
   const [humidity, setHumidity] = useState(value?.humidityPct?.toString() ?? '');
   const [firmness, setFirmness] = useState<'soft' | 'normal' | 'firm'>(value?.firmness ?? 'normal');
   const [error, setError] = useState<string | null>(null);
@@ -46,9 +52,9 @@ export function CourseConditions({ value, onChange, changes, busy, units }: Cour
     const t = parseOptionalNumber(temperature);
     const h = parseOptionalNumber(humidity);
     if ([a, t, h].some((x) => x !== null && Number.isNaN(x))) return setError('Enter numbers (or leave a box empty).');
-    const to = { altitudeM: a ?? undefined, temperatureC: t ?? undefined, humidityPct: h ?? undefined, firmness } as NonNullable<AnalysisParams['to']>;
-    if (to.altitudeM !== undefined && (to.altitudeM < -430 || to.altitudeM > 4500)) return setError('Altitude between −430 and 4,500 m.');
-    if (to.temperatureC !== undefined && (to.temperatureC < -20 || to.temperatureC > 50)) return setError('Temperature between −20 and 50 °C.');
+    const to = { altitudeM: a === null ? undefined : toMetres(a, altitudeUnit), temperatureC: t === null ? undefined : toCelsius(t, temperatureUnit), humidityPct: h ?? undefined, firmness } as NonNullable<AnalysisParams['to']>;
+    if (to.altitudeM !== undefined && (to.altitudeM < -430 || to.altitudeM > 4500)) return setError(altitudeUnit === 'ft' ? 'Altitude between −1,410 and 14,760 ft.' : 'Altitude between −430 and 4,500 m.');
+    if (to.temperatureC !== undefined && (to.temperatureC < -20 || to.temperatureC > 50)) return setError(temperatureUnit === 'f' ? 'Temperature between −4 and 122 °F.' : 'Temperature between −20 and 50 °C.');
     if (to.humidityPct !== undefined && (to.humidityPct < 0 || to.humidityPct > 100)) return setError('Humidity 0 to 100 %.');
     setError(null);
     onChange(Object.values(to).some((x) => x !== undefined) ? to : null);
@@ -59,8 +65,8 @@ export function CourseConditions({ value, onChange, changes, busy, units }: Cour
         The ball-flight model flies each shot’s launch in the bay’s air and in the course’s air and adjusts carry, apex and flight time by the difference; total also follows the course’s ground (the roll model’s firmness settings are our assumption). The strays stay those of the measured shots.
       </AppText>
       <View style={styles.row}>
-        <View style={styles.cell}><TextField label="Altitude" suffix="m" value={altitude} onChangeText={setAltitude} inputMode="decimal" /></View>
-        <View style={styles.cell}><TextField label="Temperature" suffix="°C" value={temperature} onChangeText={setTemperature} inputMode="decimal" /></View>
+        <View style={styles.cell}><TextField label="Altitude" suffix={UNIT_SYMBOL[altitudeUnit]} value={altitude} onChangeText={setAltitude} inputMode="decimal" /></View>
+        <View style={styles.cell}><TextField label="Temperature" suffix={UNIT_SYMBOL[temperatureUnit]} value={temperature} onChangeText={setTemperature} inputMode="decimal" /></View>
         <View style={styles.cell}><TextField label="Humidity" suffix="%" value={humidity} onChangeText={setHumidity} inputMode="decimal" /></View>
       </View>
       <ChoiceField label="Ground" value={firmness} options={FIRMNESS} onChange={setFirmness} />

@@ -1,6 +1,7 @@
 import { useEffect, useMemo } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { clubInfo } from '@/analysis/clubs';
+import { celsiusTo, metresTo, UNIT_SYMBOL, type AltitudeUnit, type TemperatureUnit } from '@/analysis/units';
 import type { Fitting } from '@/server/schemas';
 import { ChipRow } from '../analysis/chip-row';
 import { courseChanges } from '../analysis/course-changes';
@@ -25,6 +26,10 @@ import { SwitchField } from '../ui/switch-field';
 import type { FittingPageState } from './use-fitting-page-state';
 
 type DecideViewProps = { fitting: Fitting; state: FittingPageState };
+
+/** Altitude and temperature in the user's units, e.g. "5,249 ft, 86 °F". */
+const airWords = (altitudeM: number, temperatureC: number, me: { altitudeUnit: AltitudeUnit; temperatureUnit: TemperatureUnit }) =>
+  `${Math.round(metresTo(altitudeM, me.altitudeUnit)).toLocaleString('en-GB')} ${UNIT_SYMBOL[me.altitudeUnit]}, ${Math.round(celsiusTo(temperatureC, me.temperatureUnit) * 10) / 10} ${UNIT_SYMBOL[me.temperatureUnit]}`;
 
 /**
  * What the fitter decides from, per club: where the shots land (with the strays), the
@@ -63,7 +68,7 @@ export function DecideView({ fitting, state }: DecideViewProps) {
     <View style={styles.view}>
       {state.to ? (
         <Notice tone="info" title="At the player’s course">
-          {`Figures as the ball-flight model expects them at ${state.to.altitudeM ?? 0} m, ${state.to.temperatureC ?? 15} °C; measured in the bay at ${air.measured.altitudeM ?? 0} m, ${air.measured.temperatureC ?? 15} °C. The strays are the measured ones.`}
+          {`Figures as the ball-flight model expects them at ${airWords(state.to.altitudeM ?? 0, state.to.temperatureC ?? 15, me)}; measured in the bay at ${airWords(air.measured.altitudeM ?? 0, air.measured.temperatureC ?? 15, me)}. The strays are the measured ones.`}
         </Notice>
       ) : null}
       <ChipRow label="Club" value={club} options={clubs.map((c) => ({ value: c, label: clubInfo(c)?.label ?? c }))} onChange={state.setClub} />
@@ -99,7 +104,7 @@ export function DecideView({ fitting, state }: DecideViewProps) {
         </Section>
       ) : null}
       <Section title="At the player’s course">
-        <CourseConditions value={state.to} onChange={state.setTo} changes={changes} busy={query.isFetching || measured.isFetching} units={units} />
+        <CourseConditions value={state.to} onChange={state.setTo} changes={changes} busy={query.isFetching || measured.isFetching} units={units} altitudeUnit={me.altitudeUnit} temperatureUnit={me.temperatureUnit} />
       </Section>
     </View>
   );

@@ -1,14 +1,17 @@
+import { celsiusTo, metresTo, UNIT_SYMBOL } from '@/analysis/units';
 import type { Fitting } from '@/server/schemas';
 import { formatDate, formatVenue, plural } from '../format';
 import { Card } from '../ui/card';
 import { DetailList } from '../ui/detail-list';
+import { useMe } from '../session/session-provider';
 
 type FittingDetailsProps = { fitting: Fitting };
 
-const withUnit = (n: number | null, unit: string) => (n === null ? null : `${n} ${unit}`);
+const withUnit = (n: number | null, unit: string) => (n === null ? null : `${Math.round(n * 10) / 10} ${unit}`);
 
-/** Who, when, where and in which conditions. Conditions are kept in °C, m and %. */
+/** Who, when, where and in which conditions (kept in °C, m and %; shown in the user's units). */
 export function FittingDetails({ fitting }: FittingDetailsProps) {
+  const me = useMe();
   return (
     <Card>
       <DetailList
@@ -17,8 +20,8 @@ export function FittingDetails({ fitting }: FittingDetailsProps) {
           { label: 'Fitter', value: fitting.fitterName },
           { label: 'Date', value: formatDate(fitting.date) },
           { label: 'Venue', value: formatVenue(fitting.venue) + (fitting.remote ? ' · remote' : '') },
-          { label: 'Temperature', value: withUnit(fitting.temperatureC, '°C') },
-          { label: 'Altitude', value: withUnit(fitting.altitudeM, 'm') },
+          { label: 'Temperature', value: withUnit(fitting.temperatureC === null ? null : celsiusTo(fitting.temperatureC, me.temperatureUnit), UNIT_SYMBOL[me.temperatureUnit]) },
+          { label: 'Altitude', value: withUnit(fitting.altitudeM === null ? null : metresTo(fitting.altitudeM, me.altitudeUnit), UNIT_SYMBOL[me.altitudeUnit]) },
           { label: 'Humidity', value: withUnit(fitting.humidityPct, '%') },
           { label: 'Ground', value: fitting.groundFirmness ? `${fitting.groundFirmness[0].toUpperCase()}${fitting.groundFirmness.slice(1)}` : null },
           { label: 'Ball', value: fitting.ball },

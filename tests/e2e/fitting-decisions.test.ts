@@ -117,8 +117,9 @@ describe('the fitting page’s decisions', () => {
   it('at the player’s course on a wide screen, what changed shows right under the button', async () => {
     const page = await demo.browser.newPage({ viewport: DESKTOP });
     await openSevenIron(page);
-    await page.getByLabel('Altitude').fill('1600');
-    await page.getByLabel('Temperature').fill('30');
+    // The demo fitter reads altitude in feet and temperature in °F: about 1,600 m and 30 °C.
+    await page.getByLabel('Altitude').fill('5250');
+    await page.getByLabel('Temperature').fill('86');
     const button = page.getByRole('button', { name: 'Show at the course' });
     await button.click();
     const changed = page.getByText('What changed at the course');
