@@ -2,8 +2,6 @@
  * Spec sheets through the routes, with e-mail over a real SMTP exchange: nodemailer (SMTP_URL)
  * to a local smtp-server on loopback.
  */
-import type { AddressInfo } from 'node:net';
-import { SMTPServer } from 'smtp-server';
 import request from 'supertest';
 import type { Agent } from 'supertest';
 import { Build, Player } from '@/server/models';
@@ -11,10 +9,11 @@ import { buildFitting, buildShopWorld } from '@/fixtures/builders';
 import { buildBagClub, buildPlayerWithAccount, importCsv } from '@/fixtures/bag-builders';
 import { createTestContext, type TestContext } from '../../support/test-db';
 import { APP_HEADER, signedInAgent } from '../../support/sign-in';
+import { useSmtpCapture } from '../../support/smtp-capture';
 
 let ctx: TestContext;
-let smtp: SMTPServer;
-const received: string[] = [];
+const smtp = useSmtpCapture();
+const received = smtp.received;
 let world: Awaited<ReturnType<typeof buildShopWorld>>;
 let rival: Awaited<ReturnType<typeof buildShopWorld>>;
 let as: Record<'playerA' | 'playerB' | 'fitter' | 'owner' | 'rivalFitter' | 'rivalOwner', Agent>;
@@ -25,26 +24,10 @@ const CSV = [
 ].join('\n');
 
 beforeAll(async () => {
-  smtp = new SMTPServer({
-    authOptional: true,
-    disabledCommands: ['STARTTLS', 'AUTH'],
-    logger: false,
-    size: 10 * 1024 * 1024,
-    onData(stream, _session, callback) {
-      let data = '';
-      stream.on('data', (chunk: Buffer) => (data += chunk.toString('utf8')));
-      stream.on('end', () => {
-        received.push(data);
-        callback();
-      });
-    },
-  });
-  await new Promise<void>((resolve) => smtp.listen(0, '127.0.0.1', resolve));
-  const { port } = smtp.server.address() as AddressInfo;
   // The links name the HTTPS address; the agents talk plain HTTP on loopback, so cookies go without
   // the Secure flag here (with APP_URL on https they would get it, and a browser would keep them
   // off plain HTTP).
-  ctx = await createTestContext({ SMTP_URL: `smtp://127.0.0.1:${port}/?ignoreTLS=true`, APP_URL: 'https://ovalyard.test', COOKIE_SECURE: '0' });
+  ctx = await createTestContext({ SMTP_URL: smtp.url(), APP_URL: 'https://ovalyard.test', COOKIE_SECURE: '0' });
   world = await buildShopWorld();
   rival = await buildShopWorld();
   await Player.update({ email: 'player-a@test.example' }, { where: { id: world.player.id } });
@@ -60,7 +43,6 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await ctx.close();
-  await new Promise<void>((resolve) => smtp.close(() => resolve()));
 });
 
 /** A fitting of world.player with a session, a driver in the bag and the 'Loft up' build chosen. */
