@@ -4,7 +4,7 @@
  */
 import { RateLimiterMySQL, type RateLimiterAbstract } from 'rate-limiter-flexible';
 import type { Sequelize } from 'sequelize';
-import { storePool } from './rate-limit';
+import { limiterStore } from './rate-limit';
 
 export interface FittingLimits {
   /** Messages per person: 30 in ten minutes. */
@@ -14,14 +14,7 @@ export interface FittingLimits {
 }
 
 export function createFittingLimits(sequelize: Sequelize, points = { messages: 30, requests: 5 }): FittingLimits {
-  const common = {
-    storeClient: storePool(sequelize),
-    storeType: 'pool',
-    dbName: sequelize.getDatabaseName(),
-    tableName: 'rate_limits',
-    tableCreated: true,
-    clearExpiredByTimeout: false,
-  };
+  const common = limiterStore(sequelize);
   return {
     messages: new RateLimiterMySQL({ ...common, keyPrefix: 'msg', points: points.messages, duration: 600 }),
     requests: new RateLimiterMySQL({ ...common, keyPrefix: 'req', points: points.requests, duration: 86_400 }),

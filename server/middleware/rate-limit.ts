@@ -24,7 +24,7 @@ interface DriverConnection {
  * The store reaches MariaDB through Sequelize's own pool, with the callback API and `??`
  * identifier placeholders it expects (the mariadb driver has promises and `?` only).
  */
-export function storePool(sequelize: Sequelize) {
+function storePool(sequelize: Sequelize) {
   const manager = (sequelize as unknown as { connectionManager: { getConnection(): Promise<DriverConnection>; releaseConnection(c: DriverConnection): Promise<void> } }).connectionManager;
   const expand = (sql: string, values: unknown[]): [string, unknown[]] => {
     const out: unknown[] = [];
@@ -77,17 +77,21 @@ export interface RateLimits {
 }
 
 /** The limiters of one app, on its database (the `rate_limits` table of migration 0006). */
-export function createRateLimits(sequelize: Sequelize, config: Config): RateLimits {
-  const duration = Math.max(1, Math.round(config.signIn.windowMs / 1000));
-  const common = {
+/** Options every limiter of this database shares: the `rate_limits` table through Sequelize's pool. */
+export function limiterStore(sequelize: Sequelize) {
+  return {
     storeClient: storePool(sequelize),
     storeType: 'pool',
     dbName: sequelize.getDatabaseName(),
     tableName: 'rate_limits',
     tableCreated: true,
     clearExpiredByTimeout: false,
-    duration,
   };
+}
+
+export function createRateLimits(sequelize: Sequelize, config: Config): RateLimits {
+  const duration = Math.max(1, Math.round(config.signIn.windowMs / 1000));
+  const common = { ...limiterStore(sequelize), duration };
   return {
     byAddress: new RateLimiterMySQL({ ...common, keyPrefix: 'addr', points: config.signIn.limit }),
     failedByAccount: new RateLimiterMySQL({ ...common, keyPrefix: 'acct', points: config.signIn.accountLimit }),
