@@ -1,4 +1,11 @@
+import { celsiusTo, metresTo, UNIT_SYMBOL, type AltitudeUnit, type TemperatureUnit } from '@/analysis/units';
 import type { Role } from '@/server/schemas';
+
+/** An altitude (kept in m) or a temperature (kept in °C) in the user's unit, to a tenth: "5249.3 ft", "86 °F". */
+export function formatAir(value: number, quantity: 'altitude' | 'temperature', me: { altitudeUnit: AltitudeUnit; temperatureUnit: TemperatureUnit }): string {
+  const shown = quantity === 'altitude' ? metresTo(value, me.altitudeUnit) : celsiusTo(value, me.temperatureUnit);
+  return `${Math.round(shown * 10) / 10} ${UNIT_SYMBOL[quantity === 'altitude' ? me.altitudeUnit : me.temperatureUnit]}`;
+}
 
 /**
  * A handicap index as golfers write it: a negative stored value is a "plus" handicap (+2.0).

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { clubInfo } from '@/analysis/clubs';
 import { celsiusTo, metresTo, toCelsius, toMetres, UNIT_SYMBOL, type AltitudeUnit, type TemperatureUnit, type UnitSystem } from '@/analysis/units';
+import { shown } from '../fittings/fitting-form-values';
 import { formatField } from '../format-field';
 import { parseOptionalNumber } from '../forms';
 import type { AnalysisParams } from '../queries/analysis';
@@ -24,9 +25,6 @@ type CourseConditionsProps = {
   altitudeUnit: AltitudeUnit;
   temperatureUnit: TemperatureUnit;
 };
-
-/** A value converted for a field: at most one decimal, none when whole. */
-const shown = (x: number | undefined, convert: (v: number) => number) => (x === undefined ? '' : String(Math.round(convert(x) * 10) / 10));
 
 const FIRMNESS = [
   { value: 'soft', label: 'Soft' },

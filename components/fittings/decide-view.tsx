@@ -1,7 +1,6 @@
 import { useEffect, useMemo } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { clubInfo } from '@/analysis/clubs';
-import { celsiusTo, metresTo, UNIT_SYMBOL, type AltitudeUnit, type TemperatureUnit } from '@/analysis/units';
 import type { Fitting } from '@/server/schemas';
 import { ChipRow } from '../analysis/chip-row';
 import { courseChanges } from '../analysis/course-changes';
@@ -12,6 +11,7 @@ import { OddsSection } from '../analysis/odds-section';
 import { OvalSection } from '../analysis/oval-section';
 import { analysisShots } from '../analysis/plot-shots';
 import { errorMessage } from '../api-client';
+import { formatAir } from '../format';
 import { useFittingAnalysisQuery, useShotDecisionMutation, type AnalysisParams } from '../queries/analysis';
 import { usePlayerQuery } from '../queries/players';
 import { isStaff } from '../session/permissions';
@@ -27,9 +27,8 @@ import type { FittingPageState } from './use-fitting-page-state';
 
 type DecideViewProps = { fitting: Fitting; state: FittingPageState };
 
-/** Altitude and temperature in the user's units, e.g. "5,249 ft, 86 °F". */
-const airWords = (altitudeM: number, temperatureC: number, me: { altitudeUnit: AltitudeUnit; temperatureUnit: TemperatureUnit }) =>
-  `${Math.round(metresTo(altitudeM, me.altitudeUnit)).toLocaleString('en-GB')} ${UNIT_SYMBOL[me.altitudeUnit]}, ${Math.round(celsiusTo(temperatureC, me.temperatureUnit) * 10) / 10} ${UNIT_SYMBOL[me.temperatureUnit]}`;
+/** Altitude and temperature in the user's units, e.g. "5249.3 ft, 86 °F". */
+const airWords = (altitudeM: number, temperatureC: number, me: Parameters<typeof formatAir>[2]) => `${formatAir(altitudeM, 'altitude', me)}, ${formatAir(temperatureC, 'temperature', me)}`;
 
 /**
  * What the fitter decides from, per club: where the shots land (with the strays), the

@@ -1,6 +1,5 @@
-import { celsiusTo, metresTo, UNIT_SYMBOL } from '@/analysis/units';
 import type { Fitting } from '@/server/schemas';
-import { formatDate, formatVenue, plural } from '../format';
+import { formatAir, formatDate, formatVenue, plural } from '../format';
 import { Card } from '../ui/card';
 import { DetailList } from '../ui/detail-list';
 import { useMe } from '../session/session-provider';
@@ -20,8 +19,8 @@ export function FittingDetails({ fitting }: FittingDetailsProps) {
           { label: 'Fitter', value: fitting.fitterName },
           { label: 'Date', value: formatDate(fitting.date) },
           { label: 'Venue', value: formatVenue(fitting.venue) + (fitting.remote ? ' · remote' : '') },
-          { label: 'Temperature', value: withUnit(fitting.temperatureC === null ? null : celsiusTo(fitting.temperatureC, me.temperatureUnit), UNIT_SYMBOL[me.temperatureUnit]) },
-          { label: 'Altitude', value: withUnit(fitting.altitudeM === null ? null : metresTo(fitting.altitudeM, me.altitudeUnit), UNIT_SYMBOL[me.altitudeUnit]) },
+          { label: 'Temperature', value: fitting.temperatureC === null ? null : formatAir(fitting.temperatureC, 'temperature', me) },
+          { label: 'Altitude', value: fitting.altitudeM === null ? null : formatAir(fitting.altitudeM, 'altitude', me) },
           { label: 'Humidity', value: withUnit(fitting.humidityPct, '%') },
           { label: 'Ground', value: fitting.groundFirmness ? `${fitting.groundFirmness[0].toUpperCase()}${fitting.groundFirmness.slice(1)}` : null },
           { label: 'Ball', value: fitting.ball },

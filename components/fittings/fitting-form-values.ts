@@ -8,7 +8,7 @@ export type ConditionUnits = { temperature: TemperatureUnit; altitude: AltitudeU
 export const METRIC_CONDITIONS: ConditionUnits = { temperature: 'c', altitude: 'm' };
 
 /** A stored value shown in a unit, to a tenth (a round trip of a typed whole number stays whole). */
-const shown = (value: number | null | undefined, convert: (v: number) => number): string =>
+export const shown = (value: number | null | undefined, convert: (v: number) => number): string =>
   value == null ? '' : numberText(Math.round(convert(value) * 10) / 10);
 
 /** The fitting form's inputs, all text. Temperature and altitude in the form's ConditionUnits, humidity %. */
