@@ -3,6 +3,7 @@
  * (number format, side notation) and the field's limits, so each cell costs one call.
  */
 import type { ShotField } from '@/analysis/fields';
+import type { Hand } from '@/analysis/plain-words/handed-words';
 import { fieldDimension, findUnit, type UnitInfo } from '@/analysis/units';
 import { ImportError } from './import-error';
 import { isShotField, type MergedColumn } from './merge-recipe';
@@ -21,6 +22,8 @@ export interface ColumnPlan {
   factor: number;
   /** Slot index of the field. */
   slot: number;
+  /** −1 when the column's signs are turned round (written for a left-handed player's hand), else 1. */
+  sign: 1 | -1;
   /** Whether the column holds plain numbers (no side notation), read inline. */
   plain: boolean;
   min: number;
@@ -28,11 +31,12 @@ export interface ColumnPlan {
 }
 
 /**
- * Plans for the columns mapped to shot fields. O(columns).
+ * Plans for the columns mapped to shot fields. A column written for the player's hand (`handed`)
+ * of a left-handed player's file reads with its sign turned round. O(columns).
  * @throws ImportError UNKNOWN_UNIT (no or an unknown unit), UNIT_MISMATCH (a unit of another dimension)
- * @example compilePlans([{ header: 'Carry', index: 1, field: 'carry', unit: 'yd', side: null }], reader, '.')[0].factor // => 0.9144
+ * @example compilePlans([{ header: 'Carry', index: 1, field: 'carry', unit: 'yd', side: null, handed: false }], reader, '.')[0].factor // => 0.9144
  */
-export function compilePlans(merged: readonly MergedColumn[], readNumber: NumberReader, decimal: DecimalMark): ColumnPlan[] {
+export function compilePlans(merged: readonly MergedColumn[], readNumber: NumberReader, decimal: DecimalMark, hand: Hand = 'right'): ColumnPlan[] {
   const plans: ColumnPlan[] = [];
   for (const m of merged) {
     if (!isShotField(m.field)) continue;
@@ -45,7 +49,7 @@ export function compilePlans(merged: readonly MergedColumn[], readNumber: Number
     }
     const read = m.side !== null ? compileSideReader(m.side, readNumber, decimal) : readNumber;
     const { min, max } = SHOT_LIMITS[m.field];
-    plans.push({ header: m.header, index: m.index, field: m.field, unit, read, factor: unit.factor, slot: SLOT[m.field], plain: m.side === null, min, max });
+    plans.push({ header: m.header, index: m.index, field: m.field, unit, read, factor: unit.factor, sign: m.handed && hand === 'left' ? -1 : 1, slot: SLOT[m.field], plain: m.side === null, min, max });
   }
   return plans;
 }

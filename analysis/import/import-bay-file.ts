@@ -19,6 +19,7 @@ import { sniffDetail, type SniffResult } from './sniff';
 import { endsWithLineBreak, newRowBounds, splitRows } from './split-rows';
 import { recipeOf, sampleColumns, sampleRows, suggestFromDetail, type AmbiguousColumn, type ColumnSuggestion } from './suggest-mapping';
 import { stripBom } from './text-lines';
+import type { Hand } from '@/analysis/plain-words/handed-words';
 import { unitWarnings, type ImportWarning } from './unit-plausibility';
 
 export type { RejectedRow } from './row-reader';
@@ -34,6 +35,11 @@ export interface ImportOptions {
   buildByClub?: Record<string, string>;
   /** Hook to fill flight fields (carry, apex…) the file lacks; its fields are marked derived. */
   fillFlight?: (values: ShotValues) => { values: ShotValues; derived: ShotField[] };
+  /**
+   * The player's hand: for a left-handed player, columns the recipe marks as written for the
+   * player's hand (`handed`) are turned round to Ovalyard's + = right. Default right.
+   */
+  hand?: Hand;
 }
 
 export interface ImportResult {
@@ -84,7 +90,7 @@ export function importBayFile(input: string, options: ImportOptions = {}): Impor
   const statedUnits = sniffed.rawHeaders.map((h, i) => parseHeader(h).unit ?? findUnit(sniffed.units[i] ?? ''));
   const merged = mergeRecipe(suggestion.suggestions, statedUnits, recipe, warnings);
   const readNumber = compileNumberReader(sniffed.decimal, sniffed.thousands);
-  const plans = compilePlans(merged, readNumber, sniffed.decimal);
+  const plans = compilePlans(merged, readNumber, sniffed.decimal, options.hand);
   for (const w of unitWarnings(sampleColumns(merged, sampleRows(detail), readNumber))) warnings.push(w);
 
   const clubIndex = merged.find((m) => m.field === 'club')?.index ?? -1;

@@ -7,6 +7,8 @@ export {
   COLUMN_TARGETS,
   SIDE_NOTATIONS,
   recipeSchema,
+  HANDED_FIELDS,
+  isHandedTarget,
   type ColumnTarget,
   type Recipe,
   type RecipeColumn,

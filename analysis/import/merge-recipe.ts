@@ -17,6 +17,8 @@ export interface MergedColumn {
   field: ColumnTarget;
   unit: string | null;
   side: SideNotation | null;
+  /** Signed values written for the player's hand (recipe.ts, `handed`). */
+  handed: boolean;
 }
 
 export function isShotField(target: ColumnTarget): target is ShotField {
@@ -49,7 +51,7 @@ export function mergeRecipe(
   recipe: Recipe | undefined,
   warnings: ImportWarning[],
 ): MergedColumn[] {
-  const merged: MergedColumn[] = suggestions.map((s) => ({ header: s.header, index: s.index, field: s.field, unit: s.unit, side: s.side }));
+  const merged: MergedColumn[] = suggestions.map((s) => ({ header: s.header, index: s.index, field: s.field, unit: s.unit, side: s.side, handed: false }));
   if (!recipe) return merged;
   const byHeader = new Map(merged.map((m) => [m.header, m]));
   const claimed = new Map<ColumnTarget, string>();
@@ -88,6 +90,7 @@ export function mergeRecipe(
     target.field = column.field;
     target.unit = unit;
     target.side = side;
+    target.handed = column.handed === true && isShotField(column.field);
   }
   // a field the recipe gave to one column is taken from any other column the suggestion gave it to
   for (const m of merged) {
@@ -97,6 +100,7 @@ export function mergeRecipe(
       m.field = 'ignore';
       m.unit = null;
       m.side = null;
+      m.handed = false;
     }
   }
   return merged;

@@ -26,6 +26,14 @@ export const SIDE_NOTATIONS = [
 /** What a column holds: a canonical shot field, the club, (part of) the build, or nothing we keep. */
 export type ColumnTarget = ShotField | 'club' | 'build' | 'ignore';
 
+/** Fields a file may write for the player's hand: the left/right fields and face to path. */
+export const HANDED_FIELDS: ReadonlySet<ShotField> = new Set<ShotField>([...SIDE_FIELDS, 'faceToPath']);
+
+/** Whether a column target may be written for the player's hand. */
+export function isHandedTarget(target: ColumnTarget): target is ShotField {
+  return target !== 'club' && target !== 'build' && target !== 'ignore' && HANDED_FIELDS.has(target);
+}
+
 export const COLUMN_TARGETS = [...SHOT_FIELDS, 'club', 'build', 'ignore'] as const;
 
 export interface RecipeColumn {
@@ -34,6 +42,13 @@ export interface RecipeColumn {
   unit?: string;
   /** Side notation; for left/right fields only. */
   side?: SideNotation;
+  /**
+   * Signed values written for the player's hand rather than the target line: + is right for a
+   * right-handed player and left for a left-handed one, so a left-hander's values are turned
+   * round on import (stored shots keep + = right for both hands). For the left/right fields and
+   * face to path, with a signed notation only (L and R letters are the same for both hands).
+   */
+  handed?: boolean;
 }
 
 export type Recipe = {
@@ -50,6 +65,7 @@ const columnSchema = z
     field: z.enum(COLUMN_TARGETS),
     unit: z.string().min(1).max(40).optional(),
     side: z.enum(SIDE_NOTATIONS).optional(),
+    handed: z.boolean().optional(),
   })
   .strict()
   .superRefine((column, ctx) => {
@@ -76,6 +92,14 @@ const columnSchema = z
       column.field !== 'club' && column.field !== 'build' && column.field !== 'ignore' && SIDE_FIELDS.has(column.field);
     if (!isSideField) {
       ctx.addIssue({ code: 'custom', path: ['side'], message: `${column.field} has no left/right side` });
+    }
+  })
+  .superRefine((column, ctx) => {
+    if (column.handed !== true) return;
+    if (!isHandedTarget(column.field)) {
+      ctx.addIssue({ code: 'custom', path: ['handed'], message: `${column.field} is the same for both hands` });
+    } else if (column.side === 'suffix-LR' || column.side === 'prefix-LR') {
+      ctx.addIssue({ code: 'custom', path: ['handed'], message: 'L and R letters are the same for both hands; only signed values can be written for the player\'s hand' });
     }
   });
 

@@ -144,6 +144,7 @@ export function createRowReader(options: RowReaderOptions): { onRow: RowHandler;
         rejected.push({ row, line, column: plan.header, reason: `the cell's unit ${state.unit.unit} does not fit ${plan.field}` });
         return;
       }
+      canonical *= plan.sign;
       if (!(canonical >= plan.min && canonical <= plan.max)) {
         rejected.push({ row, line, column: plan.header, reason: checkLimit(plan.field, canonical)! });
         return;

@@ -25,6 +25,8 @@ export interface ColumnSuggestion {
   /** Unit name (units.ts) for a shot field; the text as written when the unit is unknown. */
   unit: string | null;
   side: SideNotation | null;
+  /** Signed values written for the player's hand (only from a recipe; recipe.ts, `handed`). */
+  handed?: boolean;
   /** 0..1: how sure the suggestion is. */
   confidence: number;
   reason: string;
@@ -308,6 +310,7 @@ export function recipeOf(sniffed: SniffResult, suggestions: readonly ColumnSugge
     const column: RecipeColumn = { field: s.field };
     if (s.unit !== null) column.unit = s.unit;
     if (s.side !== null) column.side = s.side;
+    if (s.handed) column.handed = true;
     columns[s.header] = column;
   }
   return { delimiter: sniffed.delimiter, decimal: sniffed.decimal, headerRow: sniffed.headerRow, columns };

@@ -6,7 +6,7 @@ import { ChoiceField } from '../ui/choice-field';
 import { SelectField } from '../ui/select-field';
 import type { ColumnNote } from './column-note';
 import { ConfidenceBadge } from './confidence-badge';
-import { isSideTarget, SIDE_OPTIONS, TARGET_OPTIONS, unitName, unitOptionsFor } from './recipe-edit';
+import { HAND_OPTIONS, isSideTarget, mayBeHanded, SIDE_OPTIONS, TARGET_OPTIONS, unitName, unitOptionsFor } from './recipe-edit';
 
 /** The answers to an open sign question: the two signed conventions, in the trade's words. */
 const SIGN_ANSWERS: readonly { value: SideNotation; label: string }[] = [
@@ -22,10 +22,13 @@ type MappingColumnRowProps = {
   onField: (field: ColumnTarget) => void;
   onUnit: (unit: string) => void;
   onSide: (side: SideNotation) => void;
+  /** The player's hand (from the preview); a left-hander's signed columns may be written for it. */
+  hand?: 'right' | 'left';
+  onHanded: (handed: boolean) => void;
 };
 
 /** One column of the file: its header and samples as written, and what Ovalyard reads it as. */
-export function MappingColumnRow({ suggestion, column, note, onField, onUnit, onSide }: MappingColumnRowProps) {
+export function MappingColumnRow({ suggestion, column, note, onField, onUnit, onSide, hand, onHanded }: MappingColumnRowProps) {
   const header = suggestion.header;
   // A doubtful reading of the column stands out; an open sign question is asked below instead.
   const low = note.attention && !note.question;
@@ -33,6 +36,8 @@ export function MappingColumnRow({ suggestion, column, note, onField, onUnit, on
   const unit = unitName(column.unit) ?? '';
   const unitChoices = unit || units.length === 0 ? units : [{ value: '', label: `Choose (file says "${column.unit ?? '?'}")` }, ...units];
   const ignored = column.field === 'ignore';
+  // Whose left and right: asked for a left-handed player's signed columns (and shown wherever a recipe set it).
+  const askHand = mayBeHanded(column) && !note.question && (hand === 'left' || column.handed === true);
   return (
     <View style={[styles.row, (low || note.question) && styles.low, ignored && styles.ignored]} accessibilityLabel={`Column ${header}`}>
       <View style={styles.head}>
@@ -65,6 +70,14 @@ export function MappingColumnRow({ suggestion, column, note, onField, onUnit, on
           </View>
         ) : null}
       </View>
+      {askHand ? (
+        <SelectField
+          label={`${header}: whose left and right`}
+          value={column.handed ? 'hand' : 'target'}
+          options={HAND_OPTIONS}
+          onChange={(v) => v && onHanded(v === 'hand')}
+        />
+      ) : null}
       <AppText variant="caption" tone={low ? 'default' : 'muted'}>
         {note.text}
       </AppText>

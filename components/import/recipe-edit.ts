@@ -6,7 +6,7 @@ import { FIELD_LABELS, SIDE_FIELDS, type ShotField } from '@/analysis/fields';
 import type { ColumnSuggestion } from '@/analysis/import';
 // The recipe's lists straight from their file, as server/schemas does: the family's index would
 // bring the whole file reader (and papaparse) into every page of the web app.
-import { COLUMN_TARGETS, SIDE_NOTATIONS, type ColumnTarget, type Recipe, type RecipeColumn, type SideNotation } from '@/analysis/import/recipe';
+import { COLUMN_TARGETS, isHandedTarget, SIDE_NOTATIONS, type ColumnTarget, type Recipe, type RecipeColumn, type SideNotation } from '@/analysis/import/recipe';
 import { CANONICAL_UNIT, fieldDimension, findUnit, UNITS } from '@/analysis/units';
 
 /** Column overrides by header as the file writes it (the recipe's `columns`). */
@@ -40,6 +40,17 @@ export const SIDE_OPTIONS: readonly { value: SideNotation; label: string }[] = S
   value,
   label: SIDE_LABELS[value],
 }));
+
+/** Whose left and right a signed column is written for (recipe `handed`). */
+export const HAND_OPTIONS: readonly { value: 'target' | 'hand'; label: string }[] = [
+  { value: 'target', label: 'Seen from behind: same for both hands' },
+  { value: 'hand', label: "The player's hand: turned round for a left-hander" },
+];
+
+/** Whether a column may be marked as written for the player's hand: a handed field, read from signed numbers. */
+export function mayBeHanded(column: RecipeColumn): boolean {
+  return isHandedTarget(column.field) && column.side !== 'suffix-LR' && column.side !== 'prefix-LR';
+}
 
 export function isShotTarget(target: ColumnTarget): target is ShotField {
   return target !== 'club' && target !== 'build' && target !== 'ignore';
@@ -117,7 +128,19 @@ export function setColumnUnit(overrides: ColumnOverrides, header: string, curren
 /** The overrides after choosing a side notation for one column (ignored for a column without a side). */
 export function setColumnSide(overrides: ColumnOverrides, header: string, current: RecipeColumn, side: SideNotation): Record<string, RecipeColumn> {
   if (!isSideTarget(current.field)) return { ...overrides };
-  return { ...overrides, [header]: { ...current, side } };
+  const next: RecipeColumn = { ...current, side };
+  // L and R letters are the same for both hands
+  if (!mayBeHanded(next)) delete next.handed;
+  return { ...overrides, [header]: next };
+}
+
+/** The overrides after saying whose left and right a signed column is written for (ignored where it cannot be). */
+export function setColumnHanded(overrides: ColumnOverrides, header: string, current: RecipeColumn, handed: boolean): Record<string, RecipeColumn> {
+  if (!mayBeHanded(current)) return { ...overrides };
+  const next: RecipeColumn = { ...current };
+  if (handed) next.handed = true;
+  else delete next.handed;
+  return { ...overrides, [header]: next };
 }
 
 /**
@@ -132,6 +155,7 @@ export function effectiveColumn(header: string, overrides: ColumnOverrides, used
   const column: RecipeColumn = { field: suggestion.field };
   if (suggestion.unit) column.unit = suggestion.unit;
   if (suggestion.side) column.side = suggestion.side;
+  if (suggestion.handed) column.handed = true;
   return column;
 }
 

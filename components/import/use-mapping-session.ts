@@ -4,7 +4,7 @@ import type { ImportOptions } from '@/server/schemas';
 import { useBayFilePreviewQuery, type BayFilePreview } from '../queries/bay-files';
 import { useDebouncedValue } from '../use-debounced-value';
 import { buildAssignmentFor, INITIAL_BUILD_CHOICE, type BuildChoice } from './build-choice';
-import { effectiveColumn, recipeWithOverrides, setColumnField, setColumnSide, setColumnUnit } from './recipe-edit';
+import { effectiveColumn, recipeWithOverrides, setColumnField, setColumnHanded, setColumnSide, setColumnUnit } from './recipe-edit';
 import { openSignQuestions } from './sign-questions';
 import type { UploadFile } from './upload-request';
 
@@ -54,6 +54,9 @@ export function useMappingSession({ fittingId, file, base, recipeId, initialBuil
   const setSide = useCallback((header: string, current: RecipeColumn, side: SideNotation) => {
     setOverrides((o) => setColumnSide(o, header, current, side));
   }, []);
+  const setHanded = useCallback((header: string, current: RecipeColumn, handed: boolean) => {
+    setOverrides((o) => setColumnHanded(o, header, current, handed));
+  }, []);
   const resetMapping = useCallback(() => setOverrides({}), []);
   const signQuestions = shown
     ? openSignQuestions({
@@ -73,6 +76,7 @@ export function useMappingSession({ fittingId, file, base, recipeId, initialBuil
     setField,
     setUnit,
     setSide,
+    setHanded,
     resetMapping,
     builds,
     setBuilds,

@@ -21,6 +21,8 @@ export type BayFilePreview = {
   report: ImportReport;
   /** The first 25 shots, canonical units. */
   shots: Shot[];
+  /** The player's hand: a left-hander's signed columns may be written for it (recipe `handed`). */
+  hand: 'right' | 'left';
 };
 
 /** A picked file's identity for query keys (the File itself is not serialisable). */

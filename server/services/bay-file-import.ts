@@ -8,6 +8,7 @@ import { createHash } from 'node:crypto';
 import { SHOT_FIELDS, type Shot, type ShotValues } from '../../analysis/fields';
 import { fillFlightFields, type Conditions } from '../../analysis/flight';
 import { ImportError, importBayFile, type ImportResult, type Recipe } from '../../analysis/import';
+import type { Hand } from '../../analysis/plain-words/handed-words';
 import { derivedMask } from './shot-mask';
 import type { BuildAssignment, ImportReport } from '../schemas';
 
@@ -25,6 +26,8 @@ export interface ImportTask {
   limits: BayFileLimits;
   /** The fitting's air and ground (filled totals roll on its ground). */
   air: Conditions;
+  /** The player's hand: columns written for it (recipe `handed`) are turned round for a left-hander. */
+  hand?: Hand;
   /** Whether the caller stores the shots (then they come packed in `table`). */
   store: boolean;
 }
@@ -110,14 +113,14 @@ function buildOptions(builds: BuildAssignment): { defaultBuild: string | null; b
  * conditions but no carry, total, offline, apex, descent or flight time get them from the
  * ball-flight model in the fitting's air and on its ground, marked as derived.
  */
-export function runImport(text: string, recipe: Recipe | undefined, builds: BuildAssignment, limits: BayFileLimits, air: Conditions = {}): ImportResult {
+export function runImport(text: string, recipe: Recipe | undefined, builds: BuildAssignment, limits: BayFileLimits, air: Conditions = {}, hand: Hand = 'right'): ImportResult {
   if (countLines(text) > limits.maxRows + 50) {
     throw new ImportTaskError(400, 'TOO_MANY_ROWS', `This file has more than ${limits.maxRows.toLocaleString('en')} rows, the most one import takes. Split it and import the parts.`);
   }
   const b = buildOptions(builds);
   try {
     const fillFlight = (values: ShotValues) => fillFlightFields(values, air);
-    const result = importBayFile(text, { recipe, defaultBuild: b.defaultBuild, buildByClub: b.buildByClub, fillFlight });
+    const result = importBayFile(text, { recipe, defaultBuild: b.defaultBuild, buildByClub: b.buildByClub, fillFlight, hand });
     if (b.forceBuild) for (const s of result.shots) s.build = b.forceBuild;
     if (result.rows > limits.maxRows) {
       throw new ImportTaskError(400, 'TOO_MANY_ROWS', `This file has ${result.rows.toLocaleString('en')} rows; one import takes at most ${limits.maxRows.toLocaleString('en')}.`);
@@ -199,7 +202,7 @@ export function packShots(shots: readonly Shot[]): ShotTable {
 export function runImportTask(task: ImportTask): ImportTaskResult | ImportTaskFailure {
   try {
     const text = task.text ?? decodeUpload(task.bytes ?? new Uint8Array());
-    const result = runImport(text, task.recipe, task.builds, task.limits, task.air);
+    const result = runImport(text, task.recipe, task.builds, task.limits, task.air, task.hand);
     return {
       text: task.text !== undefined ? '' : text,
       contentHash: contentHash(text),

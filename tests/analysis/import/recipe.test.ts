@@ -17,6 +17,17 @@ describe('recipeSchema', () => {
     expect(recipeSchema.parse(recipe)).toEqual(recipe);
   });
 
+  it('recipeSchema accepts signed path, face and face-to-path columns written for the player\'s hand', () => {
+    const recipe = {
+      columns: {
+        'Path (deg)': { field: 'clubPath', unit: 'deg', side: 'signed-right-positive', handed: true },
+        'Face (deg)': { field: 'faceAngle', unit: 'deg', side: 'signed-left-positive', handed: true },
+        'Face to path': { field: 'faceToPath', unit: 'deg', handed: true },
+      },
+    };
+    expect(recipeSchema.parse(recipe)).toEqual(recipe);
+  });
+
   it('recipeSchema accepts a recipe of columns only', () => {
     expect(recipeSchema.safeParse({ columns: {} }).success).toBe(true);
   });
@@ -34,6 +45,8 @@ describe('recipeSchema', () => {
     ['a side on a field without one', { columns: { A: { field: 'carry', side: 'suffix-LR' } } }],
     ['an extra key', { columns: {}, mystery: 1 }],
     ['an extra column key', { columns: { A: { field: 'carry', scale: 2 } } }],
+    ['a field that is the same for both hands written for the hand', { columns: { A: { field: 'carry', handed: true } } }],
+    ['L and R letters written for the hand', { columns: { A: { field: 'offline', side: 'suffix-LR', handed: true } } }],
   ])('recipeSchema refuses a recipe with %s', (_, recipe) => {
     expect(recipeSchema.safeParse(recipe).success).toBe(false);
   });

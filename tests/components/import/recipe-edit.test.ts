@@ -11,6 +11,7 @@ import {
   recipeFromOverrides,
   recipeWithOverrides,
   setColumnField,
+  setColumnHanded,
   setColumnSide,
   setColumnUnit,
   TARGET_OPTIONS,
@@ -135,6 +136,29 @@ describe('setColumnUnit and setColumnSide', () => {
   it('setColumnSide, a side field, sets the notation', () => {
     expect(setColumnSide({}, 'S', { field: 'offline', unit: 'm' }, 'signed-left-positive')).toEqual({
       S: { field: 'offline', unit: 'm', side: 'signed-left-positive' },
+    });
+  });
+});
+
+describe('setColumnHanded (signed values written for the player\'s hand)', () => {
+  it('marks a signed path column and clears the mark again', () => {
+    const marked = setColumnHanded({}, 'P', { field: 'clubPath', unit: 'deg', side: 'signed-right-positive' }, true);
+    expect(marked).toEqual({ P: { field: 'clubPath', unit: 'deg', side: 'signed-right-positive', handed: true } });
+    expect(setColumnHanded(marked, 'P', marked.P, false)).toEqual({ P: { field: 'clubPath', unit: 'deg', side: 'signed-right-positive' } });
+  });
+
+  it('marks face to path (no side notation of its own)', () => {
+    expect(setColumnHanded({}, 'F', { field: 'faceToPath', unit: 'deg' }, true)).toEqual({ F: { field: 'faceToPath', unit: 'deg', handed: true } });
+  });
+
+  it('refuses a field that is the same for both hands and L/R letters', () => {
+    expect(setColumnHanded({}, 'C', { field: 'carry', unit: 'm' }, true)).toEqual({});
+    expect(setColumnHanded({}, 'S', { field: 'offline', unit: 'm', side: 'suffix-LR' }, true)).toEqual({});
+  });
+
+  it('drops the mark when the column turns to L/R letters', () => {
+    expect(setColumnSide({}, 'P', { field: 'clubPath', unit: 'deg', side: 'signed-right-positive', handed: true }, 'prefix-LR')).toEqual({
+      P: { field: 'clubPath', unit: 'deg', side: 'prefix-LR' },
     });
   });
 });

@@ -1,6 +1,6 @@
 import { QueryTypes } from 'sequelize';
 import request from 'supertest';
-import { buildFitting, buildShopWorld } from '@/fixtures/builders';
+import { buildFitting, buildPlayer, buildShopWorld } from '@/fixtures/builders';
 import { createApp } from '@/server/app';
 import { createTestContext, type TestContext } from '../../support/test-db';
 import { APP_HEADER, signedInAgent } from '../../support/sign-in';
@@ -97,6 +97,46 @@ describe('bay-file preview', () => {
   it('bad options JSON answers 400', async () => {
     const agent = await signedInAgent(ctx.app, world.fitter.email);
     const res = await agent.post(`/api/fittings/${world.fitting.id}/bay-files/preview`).set(APP_HEADER).field('options', '{nope').attach('file', Buffer.from(sessionCsv()), 'a.csv');
+    expect(res.status).toBe(400);
+  });
+});
+
+describe('files written for the player\'s hand', () => {
+  // A left-hander's session whose file writes club path and face for the hand: 3.5 means 3.5° in-to-out,
+  // which for a left-hander points left of the target line (common practice, no source).
+  const lefty = 'Club,Ball Speed (mph),Carry (yds),Offline (yds),Club Path (deg),Face Angle (deg)\n7 Iron,114.0,162,6.0,3.5,0.8\n7 Iron,113.2,160,-2.0,-1.5,1.9\n';
+  const recipe = { columns: { 'Club Path (deg)': { field: 'clubPath', unit: 'deg', handed: true }, 'Face Angle (deg)': { field: 'faceAngle', unit: 'deg', handed: true } } };
+
+  it('the preview says the player\'s hand; a left-hander\'s handed columns are stored turned round, ground values as written', async () => {
+    const player = await buildPlayer(world.shop);
+    await player.update({ handedness: 'left' });
+    const fitting = await buildFitting(world.shop, player, world.fitter);
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const preview = await upload(agent, `/api/fittings/${fitting.id}/bay-files/preview`, lefty, { recipe });
+    expect(preview.status).toBe(200);
+    expect(preview.body.hand).toBe('left');
+    expect(preview.body.recipe.columns['Club Path (deg)']).toMatchObject({ field: 'clubPath', handed: true });
+    const res = await upload(agent, `/api/fittings/${fitting.id}/bay-files`, lefty, { recipe });
+    expect(res.status).toBe(201);
+    const shots = (await agent.get(`/api/fittings/${fitting.id}/shots`).query({ sort: 'row' })).body.shots as { values: Record<string, number> }[];
+    expect(shots.map((s) => s.values.clubPath)).toEqual([-3.5, 1.5]);
+    expect(shots.map((s) => s.values.faceAngle)).toEqual([-0.8, -1.9]);
+    // ground values are the same for both hands: 6 yd right stays right (NIST SP 811: 1 yd = 0.9144 m)
+    expect(shots[0].values.offline).toBeCloseTo(6 * 0.9144, 9);
+  });
+
+  it('a right-hander\'s handed columns are stored as written', async () => {
+    const fitting = await buildFitting(world.shop, world.player, world.fitter);
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const preview = await upload(agent, `/api/fittings/${fitting.id}/bay-files/preview`, lefty, { recipe });
+    expect(preview.body.hand).toBe('right');
+    expect(preview.body.shots[0].values.clubPath).toBe(3.5);
+  });
+
+  it('a recipe marking L and R letters as written for the hand answers 400', async () => {
+    const agent = await signedInAgent(ctx.app, world.fitter.email);
+    const bad = { columns: { 'Offline (yds)': { field: 'offline', unit: 'yd', side: 'suffix-LR', handed: true } } };
+    const res = await upload(agent, `/api/fittings/${world.fitting.id}/bay-files/preview`, lefty, { recipe: bad });
     expect(res.status).toBe(400);
   });
 });
