@@ -104,7 +104,7 @@ export function createApp({ sequelize, config, mailer, serveWeb = false, log, co
   api.use(invitationsRouter(config, mail, limits));
   api.use(fittingArchiveRouter());
   api.use('/players', playersRouter(sequelize));
-  api.use('/fittings', fittingsRouter());
+  api.use('/fittings', fittingsRouter(config, mail));
   api.use('/fittings', fittingCourseRouter(sequelize, config, mail, remoteLimits));
   api.use('/team', teamRouter());
   api.use('/recipes', recipesRouter());

@@ -14,7 +14,8 @@ import { formatField, formatSide } from '../format-field';
 import type { AnalysisShot } from './plot-shots';
 import { StrayList } from './stray-list';
 import { useWidth } from './use-width';
-import { curveWord, missWord, type Hand } from '@/analysis/plain-words/handed-words';
+import type { Hand } from '@/analysis/plain-words/handed-words';
+import { flightWords } from './flight-words';
 
 type OvalSectionProps = {
   club: string;
@@ -89,14 +90,6 @@ export function OvalSection({ club, groups, shots, units, canDecide, onDecide, d
       </View>
     </Card>
   );
-}
-
-/** " Curves: draw; finishes: miss right." for a build's mean spin axis and offline, in the player's hand's words. */
-function flightWords(g: GroupAnalysis, hand: Hand): string {
-  const axis = g.fields.spinAxis?.mean;
-  const offline = g.fields.offline?.mean;
-  const parts = [axis === undefined ? null : `curves: ${curveWord(axis, hand)}`, offline === undefined ? null : `finishes: ${missWord(offline)}`].filter(Boolean);
-  return parts.length ? ` ${parts.join('; ')} (${hand}-handed words).` : '';
 }
 
 function describeShot(s: AnalysisShot, units: UnitSystem): string {

@@ -64,15 +64,20 @@ async function remoteFitting() {
 const UNKNOWN = '00000000-0000-4000-8000-000000000000';
 
 describe('the course of a fitting', () => {
-  it('POST /api/fittings remote, opens it at "requested" with one dated step; in the bay at "in progress"', async () => {
+  it('POST /api/fittings remote, opens it at "requested" with one dated step and e-mails the player what to send; in the bay at "in progress", no e-mail', async () => {
+    mail.length = 0;
     const f = await remoteFitting();
+    expect(mail.map((m) => [m.to, m.subject])).toEqual([['player-a@test.example', expect.stringMatching(/^Your fitter opened a remote fitting/)]]);
+    expect(mail[0].text).toContain(`http://ovalyard.test/fittings/${f.id}`);
     expect(f.courseStep).toBe('requested');
     const course = await as.playerA.get(`/api/fittings/${f.id}/course`);
     expect(course.status).toBe(200);
     expect(course.body.step).toBe('requested');
     expect(course.body.entries).toHaveLength(1);
     expect(Date.parse(course.body.entries[0].at)).toBeGreaterThan(Date.now() - 60_000);
+    mail.length = 0;
     const bay = await as.fitter.post('/api/fittings').set(APP_HEADER).send({ playerId: world.player.id, date: '2026-12-01', venue: 'indoor' });
+    expect(mail).toEqual([]);
     expect(bay.body.courseStep).toBe('in-progress');
   });
 
