@@ -1,4 +1,5 @@
-import { StyleSheet, View } from 'react-native';
+import { useState } from 'react';
+import { Pressable, StyleSheet, useWindowDimensions, View } from 'react-native';
 import { COURSE_STEP_WORDS, COURSE_STEPS, type Course } from '@/server/schemas';
 import { formatDateTime } from '../format';
 import { colors, radius, space } from '../theme';
@@ -6,13 +7,49 @@ import { AppText } from '../ui/app-text';
 
 type CourseStepsProps = { course: Course };
 
-/** The seven steps of a fitting, each done one with its date; a step back shows with its reason. */
+/** Below this width the steps fold into one line and a bar, with every step a tap away. */
+const FOLD_BELOW_PX = 700;
+
+/**
+ * The seven steps of a fitting, each done one with its date; a step back shows with its reason.
+ * On a phone the list folds into a bar of seven and the current step with its date.
+ */
 export function CourseSteps({ course }: CourseStepsProps) {
+  const { width } = useWindowDimensions();
+  const [open, setOpen] = useState(false);
   const current = COURSE_STEPS.indexOf(course.step);
   // The latest forward entry of each step dates it.
   const dated = new Map<string, string>();
   for (const e of course.entries) if (e.direction === 'forward' || e.step === course.step) dated.set(e.step, e.at);
   const backs = course.entries.filter((e) => e.direction === 'back');
+  if (width < FOLD_BELOW_PX && !open) {
+    const at = dated.get(course.step);
+    return (
+      <View style={styles.list} accessibilityLabel={`Course of the fitting: ${COURSE_STEP_WORDS[course.step]}`}>
+        <View style={styles.bar} accessibilityElementsHidden importantForAccessibility="no-hide-descendants">
+          {COURSE_STEPS.map((step, i) => (
+            <View key={step} style={[styles.segment, i <= current && styles.done, i === current && styles.current]} />
+          ))}
+        </View>
+        <View style={styles.row}>
+          <AppText variant="bodyStrong" style={styles.word}>
+            {`${COURSE_STEP_WORDS[course.step]} · step ${current + 1} of ${COURSE_STEPS.length}`}
+          </AppText>
+          <AppText variant="caption" tone="muted">
+            {at ? formatDateTime(at) : ''}
+          </AppText>
+        </View>
+        {backs.length > 0 ? (
+          <AppText variant="caption" tone="muted">{`Went back ${backs.length === 1 ? 'once' : `${backs.length} times`}: see every step.`}</AppText>
+        ) : null}
+        <Pressable accessibilityRole="button" onPress={() => setOpen(true)} style={styles.toggle} hitSlop={8}>
+          <AppText tone="accent" variant="caption">
+            Every step, with dates
+          </AppText>
+        </Pressable>
+      </View>
+    );
+  }
   return (
     <View style={styles.list} accessibilityLabel={`Course of the fitting: ${COURSE_STEP_WORDS[course.step]}`}>
       {COURSE_STEPS.map((step, i) => {
@@ -35,6 +72,13 @@ export function CourseSteps({ course }: CourseStepsProps) {
           {`Back to “${COURSE_STEP_WORDS[e.step]}” on ${formatDateTime(e.at)}${e.byName ? ` by ${e.byName}` : ''}: ${e.reason ?? ''}`}
         </AppText>
       ))}
+      {open && width < FOLD_BELOW_PX ? (
+        <Pressable accessibilityRole="button" onPress={() => setOpen(false)} style={styles.toggle} hitSlop={8}>
+          <AppText tone="accent" variant="caption">
+            Fold the steps
+          </AppText>
+        </Pressable>
+      ) : null}
     </View>
   );
 }
@@ -46,4 +90,7 @@ const styles = StyleSheet.create({
   done: { backgroundColor: colors.success, borderColor: colors.success },
   current: { backgroundColor: colors.accent, borderColor: colors.accent },
   word: { flex: 1 },
+  bar: { flexDirection: 'row', gap: 4 },
+  segment: { flex: 1, height: 8, borderRadius: radius.pill, backgroundColor: colors.border },
+  toggle: { minHeight: 44, justifyContent: 'center', alignSelf: 'flex-start' },
 });

@@ -1,7 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import type { Sequelize } from 'sequelize';
-import { Build, Fitting, Player, Shop, User } from '../models';
+import { Build, Fitting, FittingCourseStep, Player, Shop, User } from '../models';
 import { createImportPool } from '../services/import-pool';
 import { commitBayFile } from '../services/bay-files';
 import { hashPassword } from '../services/passwords';
@@ -86,9 +86,19 @@ export async function seedDemo(sequelize: Sequelize, now: Date, after?: DemoHook
           ball: f.ball,
           notes: f.notes,
           remote: f.remote,
+          courseStep: 'in-progress',
         },
         { transaction },
       );
+      // Every step up to "in progress" dated as it would have happened: a remote fitting was
+      // requested three days before and its intake came in two days before; a bay fitting starts on the day.
+      const day = new Date(`${date}T09:00:00Z`).getTime();
+      const steps = f.remote
+        ? ([['requested', 3], ['intake-done', 2], ['in-progress', 0]] as const)
+        : ([['in-progress', 0]] as const);
+      for (const [step, daysBefore] of steps) {
+        await FittingCourseStep.create({ fittingId: fitting.id, shopId: shop.id, step, direction: 'forward', reason: null, at: new Date(day - daysBefore * 86_400_000), byUserId: staff.get(f.fitter)!.id }, { transaction });
+      }
       fittings.set(String(i), fitting);
     }
   });

@@ -39,3 +39,18 @@ describe('/api/demo', () => {
     expect((await request(ctx.app).post('/api/demo').set('x-ovalyard-request', '1')).status).toBe(404);
   });
 });
+
+describe('the demo fittings on their course', () => {
+  it('every step a demo fitting has reached carries a date, in order (no step shown done without one)', async () => {
+    const { COURSE_STEPS } = await import('@/server/schemas');
+    const { Fitting, FittingCourseStep } = await import('@/server/models');
+    const fittings = await Fitting.findAll();
+    expect(fittings.length).toBeGreaterThan(0);
+    for (const f of fittings) {
+      const entries = await FittingCourseStep.findAll({ where: { fittingId: f.id, direction: 'forward' }, order: [['id', 'ASC']] });
+      const reached = COURSE_STEPS.slice(COURSE_STEPS.indexOf(f.remote ? 'requested' : 'in-progress'), COURSE_STEPS.indexOf(f.courseStep) + 1);
+      expect(entries.map((e) => e.step)).toEqual(reached);
+      for (let i = 1; i < entries.length; i++) expect(entries[i].at.getTime()).toBeGreaterThanOrEqual(entries[i - 1].at.getTime());
+    }
+  });
+});
