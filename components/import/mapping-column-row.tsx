@@ -6,7 +6,7 @@ import { ChoiceField } from '../ui/choice-field';
 import { SelectField } from '../ui/select-field';
 import type { ColumnNote } from './column-note';
 import { ConfidenceBadge } from './confidence-badge';
-import { HAND_OPTIONS, isSideTarget, mayBeHanded, SIDE_OPTIONS, TARGET_OPTIONS, unitName, unitOptionsFor } from './recipe-edit';
+import { ASK_HAND_FIELDS, HAND_OPTIONS, isSideTarget, mayBeHanded, SIDE_OPTIONS, TARGET_OPTIONS, unitName, unitOptionsFor } from './recipe-edit';
 
 /** The answers to an open sign question: the two signed conventions, in the trade's words. */
 const SIGN_ANSWERS: readonly { value: SideNotation; label: string }[] = [
@@ -37,7 +37,7 @@ export function MappingColumnRow({ suggestion, column, note, onField, onUnit, on
   const unitChoices = unit || units.length === 0 ? units : [{ value: '', label: `Choose (file says "${column.unit ?? '?'}")` }, ...units];
   const ignored = column.field === 'ignore';
   // Whose left and right: asked for a left-handed player's signed columns (and shown wherever a recipe set it).
-  const askHand = mayBeHanded(column) && !note.question && (hand === 'left' || column.handed === true);
+  const askHand = mayBeHanded(column) && !note.question && ((hand === 'left' && ASK_HAND_FIELDS.has(column.field)) || column.handed === true);
   return (
     <View style={[styles.row, (low || note.question) && styles.low, ignored && styles.ignored]} accessibilityLabel={`Column ${header}`}>
       <View style={styles.head}>
@@ -71,12 +71,19 @@ export function MappingColumnRow({ suggestion, column, note, onField, onUnit, on
         ) : null}
       </View>
       {askHand ? (
-        <SelectField
-          label={`${header}: whose left and right`}
-          value={column.handed ? 'hand' : 'target'}
-          options={HAND_OPTIONS}
-          onChange={(v) => v && onHanded(v === 'hand')}
-        />
+        <View style={styles.hand}>
+          <SelectField
+            label={`${header}: whose left and right`}
+            value={column.handed ? 'hand' : 'target'}
+            options={HAND_OPTIONS}
+            onChange={(v) => v && onHanded(v === 'hand')}
+          />
+          <AppText variant="caption" tone="muted">
+            {column.handed
+              ? 'Written for the player’s hand: for a left-hander + is in-to-out or open, pointing left; Ovalyard turns it round to + is right.'
+              : 'Left and right as seen from behind the ball, the same for both hands. A file that writes in-to-out and open as + for a left-hander is “For the player’s hand”.'}
+          </AppText>
+        </View>
       ) : null}
       <AppText variant="caption" tone={low ? 'default' : 'muted'}>
         {note.text}
@@ -111,5 +118,6 @@ const styles = StyleSheet.create({
   controls: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, marginTop: space.xs },
   target: { flexGrow: 2, flexBasis: 160, minWidth: 0, maxWidth: 420 },
   small: { flexGrow: 1, flexBasis: 110, minWidth: 0, maxWidth: 240 },
+  hand: { gap: space.xs, maxWidth: 420 },
   question: { marginTop: space.xs, padding: space.sm, borderRadius: radius.md, backgroundColor: colors.cautionSoft },
 });

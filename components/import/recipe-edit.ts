@@ -43,9 +43,16 @@ export const SIDE_OPTIONS: readonly { value: SideNotation; label: string }[] = S
 
 /** Whose left and right a signed column is written for (recipe `handed`). */
 export const HAND_OPTIONS: readonly { value: 'target' | 'hand'; label: string }[] = [
-  { value: 'target', label: 'Seen from behind: same for both hands' },
-  { value: 'hand', label: "The player's hand: turned round for a left-hander" },
+  { value: 'target', label: 'Same for both hands' },
+  { value: 'hand', label: "For the player's hand" },
 ];
+
+/**
+ * Fields a file commonly writes for the player's hand (in-to-out and open positive): the mapping
+ * step asks about these for a left-handed player. Where the ball starts, curves and ends is
+ * written on the ground (common practice, no source); a recipe may still mark any left/right field.
+ */
+export const ASK_HAND_FIELDS: ReadonlySet<ColumnTarget> = new Set<ColumnTarget>(['clubPath', 'faceAngle', 'faceToPath']);
 
 /** Whether a column may be marked as written for the player's hand: a handed field, read from signed numbers. */
 export function mayBeHanded(column: RecipeColumn): boolean {
