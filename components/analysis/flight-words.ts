@@ -3,7 +3,7 @@ import type { GroupAnalysis } from '@/analysis/session';
 import { curveWord, faceWord, missWord, pathWord, type Hand } from '@/analysis/plain-words/handed-words';
 
 /**
- * " path: in-to-out; face: open; curves: draw; finishes: miss right (left-handed words)." for a
+ * " Path: in-to-out; face: open; curves: draw; finishes: miss right (left-handed words)." for a
  * build's mean club path, face angle, spin axis and offline, in the player's hand's words.
  */
 export function flightWords(g: Pick<GroupAnalysis, 'fields'>, hand: Hand): string {
@@ -17,6 +17,9 @@ export function flightWords(g: Pick<GroupAnalysis, 'fields'>, hand: Hand): strin
     axis === undefined ? null : `curves: ${curveWord(axis, hand)}`,
     offline === undefined ? null : `finishes: ${missWord(offline)}`,
   ].filter(Boolean);
-  return parts.length ? ` ${parts.join('; ')} (${hand}-handed words).` : '';
+  if (parts.length === 0) return '';
+  const text = parts.join('; ');
+  // it follows a sentence: a capital first
+  return ` ${text[0].toUpperCase()}${text.slice(1)} (${hand}-handed words).`;
 }
 

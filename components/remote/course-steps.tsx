@@ -28,7 +28,7 @@ export function CourseSteps({ course }: CourseStepsProps) {
       <View style={styles.list} accessibilityLabel={`Course of the fitting: ${COURSE_STEP_WORDS[course.step]}`}>
         <View style={styles.bar} accessibilityElementsHidden importantForAccessibility="no-hide-descendants">
           {COURSE_STEPS.map((step, i) => (
-            <View key={step} style={[styles.segment, i <= current && styles.done, i === current && styles.current]} />
+            <View key={step} style={[styles.segment, i <= current && dated.has(step) && styles.done, i === current && styles.current]} />
           ))}
         </View>
         <View style={styles.row}>
@@ -55,14 +55,16 @@ export function CourseSteps({ course }: CourseStepsProps) {
       {COURSE_STEPS.map((step, i) => {
         const done = i <= current;
         const at = done ? dated.get(step) : undefined;
+        // passed over without a date: a fitting in the bay starts "in progress", a fitter may start without the intake
+        const skipped = done && !at && i < current;
         return (
           <View key={step} style={styles.row}>
-            <View style={[styles.dot, done && styles.done, i === current && styles.current]} />
-            <AppText variant={i === current ? 'bodyStrong' : 'body'} tone={done ? 'default' : 'muted'} style={styles.word}>
+            <View style={[styles.dot, done && !skipped && styles.done, i === current && styles.current]} />
+            <AppText variant={i === current ? 'bodyStrong' : 'body'} tone={done && !skipped ? 'default' : 'muted'} style={styles.word}>
               {COURSE_STEP_WORDS[step]}
             </AppText>
             <AppText variant="caption" tone="muted">
-              {at ? formatDateTime(at) : done ? 'done' : ''}
+              {at ? formatDateTime(at) : skipped ? 'skipped' : ''}
             </AppText>
           </View>
         );

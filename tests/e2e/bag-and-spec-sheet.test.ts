@@ -9,6 +9,7 @@ import { Build, Fitting, Player, User } from '@/server/models';
 import { createMailer } from '@/server/services/mailer';
 import { importCsv } from '@/fixtures/bag-builders';
 import { DESKTOP, PHONE, signInAs, useDemoInBrowser } from '../support/browser';
+import { plainMessage as plain } from '../support/inbox-links';
 import { useSmtpCapture } from '../support/smtp-capture';
 
 jest.setTimeout(240_000);
@@ -29,9 +30,6 @@ beforeAll(async () => {
   await Build.update({ loftDeg: 11.5, hoselSetting: '+1', lengthIn: 45.75, addedMassG: 6, addedMassWhere: 'heel' }, { where: { fittingId: fitting.id, club: 'DR', label: 'Loft up + heel 6 g' } });
   fittingId = fitting.id;
 });
-
-/** The message's text with quoted-printable soft line breaks undone. */
-const plain = (raw: string) => raw.replace(/=\r?\n/g, '');
 
 describe('from a fitting to the bag and the spec sheet in the browser', () => {
   it('a demo fitter chooses the driver build, confirms the bag change and sends the sheet; it arrives with its PDF; the player accepts it on a phone', async () => {

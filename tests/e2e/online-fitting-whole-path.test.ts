@@ -10,36 +10,18 @@
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import type { Page } from 'playwright-core';
 import { Player } from '@/server/models';
 import { createMailer } from '@/server/services/mailer';
 import { DESKTOP, PHONE, signInAs, useDemoInBrowser } from '../support/browser';
+import { choosePassword, linkFor as linkIn, plainMessage as plain } from '../support/inbox-links';
 import { useSmtpCapture } from '../support/smtp-capture';
 
 jest.setTimeout(420_000);
 
 const smtp = useSmtpCapture();
+const linkFor = (to: string, pattern: RegExp) => linkIn(smtp.received, to, pattern);
+
 const site = useDemoInBrowser({ demo: false, mailer: () => createMailer(smtp.url(), 'Ovalyard <no-reply@ovalyard.invalid>') });
-
-/** The message's text with quoted-printable soft line breaks and "=" undone. */
-const plain = (raw: string) => raw.replace(/=\r?\n/g, '').replace(/=3D/g, '=');
-
-/** The link of the last message to an address (waits for it to arrive). */
-async function linkFor(to: string, pattern: RegExp): Promise<string> {
-  for (let i = 0; i < 150; i++) {
-    const message = smtp.received.map(plain).filter((m) => m.includes(`To: ${to}`)).at(-1);
-    const link = message ? pattern.exec(message)?.[0] : undefined;
-    if (link) return link;
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  throw new Error(`No link for ${to}`);
-}
-
-async function choosePassword(page: Page, password: string) {
-  await page.getByLabel('Password', { exact: true }).fill(password);
-  await page.getByLabel('Password again').fill(password);
-  await page.getByRole('button', { name: 'Set the password and sign in' }).click();
-}
 
 const INVITE = /https?:\/\/[^\s]+\/invite\/[A-Za-z0-9_-]+/;
 
@@ -185,7 +167,7 @@ describe('online fitting, the whole path on a fresh install', () => {
     await desk.getByText('Choose the builds and send the spec sheet.').waitFor({ timeout: 30_000 });
     await desk.getByRole('heading', { name: 'Head-to-head' }).waitFor({ timeout: 30_000 });
     // her path and face in her hand's words: in-to-out and open, though both point left of the line
-    await desk.getByText(/path: in-to-out; face: open; finishes: miss right \(left-handed words\)/).first().waitFor({ timeout: 30_000 });
+    await desk.getByText(/Path: in-to-out; face: open; finishes: miss right \(left-handed words\)/).first().waitFor({ timeout: 30_000 });
 
     // a build chosen for the bag, the change confirmed, the sheet sent
     await desk.goto(`${site.url}/fittings/${fittingId}?view=builds`);

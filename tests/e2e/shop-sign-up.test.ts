@@ -4,9 +4,9 @@
  * exchange to a test server on loopback), invites a fitter and a player, and each accepts from
  * their own message and lands on their own start page.
  */
-import type { Page } from 'playwright-core';
 import { createMailer } from '@/server/services/mailer';
 import { DESKTOP, PHONE, useDemoInBrowser } from '../support/browser';
+import { choosePassword, linkFor as linkIn } from '../support/inbox-links';
 import { useSmtpCapture } from '../support/smtp-capture';
 
 jest.setTimeout(240_000);
@@ -14,27 +14,9 @@ jest.setTimeout(240_000);
 const smtp = useSmtpCapture();
 const received = smtp.received;
 
+const linkFor = (to: string, pattern: RegExp) => linkIn(received, to, pattern);
+
 const site = useDemoInBrowser({ demo: false, mailer: () => createMailer(smtp.url(), 'Ovalyard <no-reply@ovalyard.invalid>') });
-
-/** The message's text with quoted-printable soft line breaks and "=" undone. */
-const plain = (raw: string) => raw.replace(/=\r?\n/g, '').replace(/=3D/g, '=');
-
-/** The link of the last message to an address (waits for it to arrive). */
-async function linkFor(to: string, pattern: RegExp): Promise<string> {
-  for (let i = 0; i < 100; i++) {
-    const message = received.map(plain).filter((m) => m.includes(`To: ${to}`)).at(-1);
-    const link = message ? pattern.exec(message)?.[0] : undefined;
-    if (link) return link;
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  throw new Error(`No link for ${to}`);
-}
-
-async function choosePassword(page: Page, password: string) {
-  await page.getByLabel('Password', { exact: true }).fill(password);
-  await page.getByLabel('Password again').fill(password);
-  await page.getByRole('button', { name: 'Set the password and sign in' }).click();
-}
 
 describe('a shop signs up and invites its people', () => {
   it('the owner signs up and confirms by e-mail; a fitter and a player accept their invitations and land on their start pages', async () => {

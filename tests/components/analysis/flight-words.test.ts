@@ -11,16 +11,16 @@ const group = (clubPath: number, faceAngle: number, spinAxis: number, offline: n
 
 describe('flightWords', () => {
   it("a right-hander's swing and its mirror image, a left-hander's, read the same handed words and opposite misses", () => {
-    expect(flightWords(group(3.5, 1.2, -6, -7), 'right')).toBe(' path: in-to-out; face: open; curves: draw; finishes: miss left (right-handed words).');
-    expect(flightWords(group(-3.5, -1.2, 6, 7), 'left')).toBe(' path: in-to-out; face: open; curves: draw; finishes: miss right (left-handed words).');
+    expect(flightWords(group(3.5, 1.2, -6, -7), 'right')).toBe(' Path: in-to-out; face: open; curves: draw; finishes: miss left (right-handed words).');
+    expect(flightWords(group(-3.5, -1.2, 6, 7), 'left')).toBe(' Path: in-to-out; face: open; curves: draw; finishes: miss right (left-handed words).');
   });
 
   it('the same stored numbers read the other way for the other hand', () => {
-    expect(flightWords(group(3.5, 1.2, -6, -7), 'left')).toBe(' path: out-to-in; face: closed; curves: fade; finishes: miss left (left-handed words).');
+    expect(flightWords(group(3.5, 1.2, -6, -7), 'left')).toBe(' Path: out-to-in; face: closed; curves: fade; finishes: miss left (left-handed words).');
   });
 
   it('says nothing of the fields a build lacks', () => {
-    expect(flightWords({ fields: { offline: { mean: 0.5 } } } as never, 'left')).toBe(' finishes: on line (left-handed words).');
+    expect(flightWords({ fields: { offline: { mean: 0.5 } } } as never, 'left')).toBe(' Finishes: on line (left-handed words).');
     expect(flightWords({ fields: {} } as never, 'right')).toBe('');
   });
 });
