@@ -9,10 +9,16 @@ import { ConfidenceBadge } from './confidence-badge';
 import { ASK_HAND_FIELDS, HAND_OPTIONS, isSideTarget, mayBeHanded, SIDE_OPTIONS, TARGET_OPTIONS, unitName, unitOptionsFor } from './recipe-edit';
 
 /** The answers to an open sign question: the two signed conventions, in the trade's words. */
-const SIGN_ANSWERS: readonly { value: SideNotation; label: string }[] = [
+const SIGN_ANSWERS: readonly { value: SideNotation | 'for-hand'; label: string }[] = [
   { value: 'signed-right-positive', label: '+ is right, − is left' },
   { value: 'signed-left-positive', label: '+ is left, − is right' },
 ];
+
+/** For a left-hander's path or face: the third answer, + as the player's hand says it. */
+const HAND_ANSWER: Partial<Record<string, string>> = {
+  clubPath: '+ is in-to-out for this left-hander',
+  faceAngle: '+ is open for this left-hander',
+};
 
 type MappingColumnRowProps = {
   suggestion: ColumnSuggestion;
@@ -22,13 +28,15 @@ type MappingColumnRowProps = {
   onField: (field: ColumnTarget) => void;
   onUnit: (unit: string) => void;
   onSide: (side: SideNotation) => void;
+  /** An answer to the column's sign question (a notation, or written for the player's hand). */
+  onSignAnswer: (answer: SideNotation | 'for-hand') => void;
   /** The player's hand (from the preview); a left-hander's signed columns may be written for it. */
   hand?: 'right' | 'left';
   onHanded: (handed: boolean) => void;
 };
 
 /** One column of the file: its header and samples as written, and what Ovalyard reads it as. */
-export function MappingColumnRow({ suggestion, column, note, onField, onUnit, onSide, hand, onHanded }: MappingColumnRowProps) {
+export function MappingColumnRow({ suggestion, column, note, onField, onUnit, onSide, onSignAnswer, hand, onHanded }: MappingColumnRowProps) {
   const header = suggestion.header;
   // A doubtful reading of the column stands out; an open sign question is asked below instead.
   const low = note.attention && !note.question;
@@ -37,6 +45,8 @@ export function MappingColumnRow({ suggestion, column, note, onField, onUnit, on
   const unitChoices = unit || units.length === 0 ? units : [{ value: '', label: `Choose (file says "${column.unit ?? '?'}")` }, ...units];
   const ignored = column.field === 'ignore';
   // Whose left and right: asked for a left-handed player's signed columns (and shown wherever a recipe set it).
+  const handAnswer = hand === 'left' ? HAND_ANSWER[column.field] : undefined;
+  const signAnswers = handAnswer ? [...SIGN_ANSWERS, { value: 'for-hand' as const, label: handAnswer }] : SIGN_ANSWERS;
   const askHand = mayBeHanded(column) && !note.question && ((hand === 'left' && ASK_HAND_FIELDS.has(column.field)) || column.handed === true);
   return (
     <View style={[styles.row, (low || note.question) && styles.low, ignored && styles.ignored]} accessibilityLabel={`Column ${header}`}>
@@ -90,11 +100,11 @@ export function MappingColumnRow({ suggestion, column, note, onField, onUnit, on
       </AppText>
       {note.question ? (
         <View style={styles.question}>
-          <ChoiceField<SideNotation | ''>
+          <ChoiceField<SideNotation | 'for-hand' | ''>
             label={`In “${header}”, which way does + point?`}
             value=""
-            options={SIGN_ANSWERS}
-            onChange={(side) => side && onSide(side)}
+            options={signAnswers}
+            onChange={(answer) => answer && onSignAnswer(answer)}
           />
         </View>
       ) : null}

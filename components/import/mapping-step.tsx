@@ -74,6 +74,7 @@ export function MappingStep({ session, preview, base, fromRecipe = false, hasBui
               onField={(field) => session.setField(s.header, field, column, s)}
               onUnit={(unit) => session.setUnit(s.header, column, unit)}
               onSide={(side) => session.setSide(s.header, column, side)}
+              onSignAnswer={(answer) => session.answerSign(s.header, column, answer)}
               hand={preview.hand}
               onHanded={(handed) => session.setHanded(s.header, column, handed)}
             />

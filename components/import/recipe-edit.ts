@@ -141,6 +141,17 @@ export function setColumnSide(overrides: ColumnOverrides, header: string, curren
   return { ...overrides, [header]: next };
 }
 
+/**
+ * The overrides after answering a column's sign question: a side notation, or "for the hand" —
+ * + is in-to-out or open for this player (signed, + right for a right-hander, turned round for a
+ * left-hander).
+ */
+export function answerSignQuestion(overrides: ColumnOverrides, header: string, current: RecipeColumn, answer: SideNotation | 'for-hand'): Record<string, RecipeColumn> {
+  if (answer !== 'for-hand') return setColumnSide(overrides, header, current, answer);
+  const signed = setColumnSide(overrides, header, current, 'signed-right-positive');
+  return setColumnHanded(signed, header, signed[header] ?? current, true);
+}
+
 /** The overrides after saying whose left and right a signed column is written for (ignored where it cannot be). */
 export function setColumnHanded(overrides: ColumnOverrides, header: string, current: RecipeColumn, handed: boolean): Record<string, RecipeColumn> {
   if (!mayBeHanded(current)) return { ...overrides };

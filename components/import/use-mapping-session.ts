@@ -4,7 +4,7 @@ import type { ImportOptions } from '@/server/schemas';
 import { useBayFilePreviewQuery, type BayFilePreview } from '../queries/bay-files';
 import { useDebouncedValue } from '../use-debounced-value';
 import { buildAssignmentFor, INITIAL_BUILD_CHOICE, type BuildChoice } from './build-choice';
-import { effectiveColumn, recipeWithOverrides, setColumnField, setColumnHanded, setColumnSide, setColumnUnit } from './recipe-edit';
+import { effectiveColumn, recipeWithOverrides, answerSignQuestion, setColumnField, setColumnHanded, setColumnSide, setColumnUnit } from './recipe-edit';
 import { openSignQuestions } from './sign-questions';
 import type { UploadFile } from './upload-request';
 
@@ -57,6 +57,9 @@ export function useMappingSession({ fittingId, file, base, recipeId, initialBuil
   const setHanded = useCallback((header: string, current: RecipeColumn, handed: boolean) => {
     setOverrides((o) => setColumnHanded(o, header, current, handed));
   }, []);
+  const answerSign = useCallback((header: string, current: RecipeColumn, answer: SideNotation | 'for-hand') => {
+    setOverrides((o) => answerSignQuestion(o, header, current, answer));
+  }, []);
   const resetMapping = useCallback(() => setOverrides({}), []);
   const signQuestions = shown
     ? openSignQuestions({
@@ -77,6 +80,7 @@ export function useMappingSession({ fittingId, file, base, recipeId, initialBuil
     setUnit,
     setSide,
     setHanded,
+    answerSign,
     resetMapping,
     builds,
     setBuilds,

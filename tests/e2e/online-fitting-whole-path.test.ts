@@ -139,15 +139,17 @@ describe('online fitting, the whole path on a fresh install', () => {
     const chooser = phone.waitForEvent('filechooser');
     await phone.getByRole('button', { name: 'Choose a bay file' }).click();
     await (await chooser).setFiles(file);
-    for (const header of ['Club Path (deg)', 'Face Angle (deg)']) {
-      // the file does not say which way + points: asked first, then whose left and right
-      const question = phone.getByRole('radiogroup', { name: `In “${header}”, which way does + point?` });
-      await question.waitFor({ timeout: 30_000 });
-      await question.getByRole('radio', { name: '+ is right, − is left' }).click();
-      const hand = phone.getByLabel(`${header}: whose left and right`);
-      await hand.waitFor({ timeout: 30_000 });
-      await hand.selectOption('hand');
-    }
+    // the file does not say which way + points: for a left-hander the page offers her hand's words
+    const pathQuestion = phone.getByRole('radiogroup', { name: 'In “Club Path (deg)”, which way does + point?' });
+    await pathQuestion.waitFor({ timeout: 30_000 });
+    await pathQuestion.getByRole('radio', { name: '+ is in-to-out for this left-hander' }).click();
+    await phone.getByLabel('Club Path (deg): whose left and right').waitFor({ timeout: 30_000 });
+    expect(await phone.getByLabel('Club Path (deg): whose left and right').inputValue()).toBe('hand');
+    // or in two answers: which way + points, then whose left and right
+    const faceQuestion = phone.getByRole('radiogroup', { name: 'In “Face Angle (deg)”, which way does + point?' });
+    await faceQuestion.waitFor({ timeout: 30_000 });
+    await faceQuestion.getByRole('radio', { name: '+ is right, − is left' }).click();
+    await phone.getByLabel('Face Angle (deg): whose left and right').selectOption('hand');
     const commit = phone.getByRole('button', { name: 'Import the bay file', disabled: false });
     await commit.waitFor({ timeout: 60_000 });
     await commit.click();

@@ -11,6 +11,7 @@ import {
   recipeFromOverrides,
   recipeWithOverrides,
   setColumnField,
+  answerSignQuestion,
   setColumnHanded,
   setColumnSide,
   setColumnUnit,
@@ -154,6 +155,12 @@ describe('setColumnHanded (signed values written for the player\'s hand)', () =>
   it('refuses a field that is the same for both hands and L/R letters', () => {
     expect(setColumnHanded({}, 'C', { field: 'carry', unit: 'm' }, true)).toEqual({});
     expect(setColumnHanded({}, 'S', { field: 'offline', unit: 'm', side: 'suffix-LR' }, true)).toEqual({});
+  });
+
+  it('answers a sign question as a notation, or as written for the hand (signed, + right for a right-hander, marked)', () => {
+    const path = { field: 'clubPath', unit: 'deg' } as const;
+    expect(answerSignQuestion({}, 'P', path, 'signed-left-positive')).toEqual({ P: { field: 'clubPath', unit: 'deg', side: 'signed-left-positive' } });
+    expect(answerSignQuestion({}, 'P', path, 'for-hand')).toEqual({ P: { field: 'clubPath', unit: 'deg', side: 'signed-right-positive', handed: true } });
   });
 
   it('drops the mark when the column turns to L/R letters', () => {
