@@ -1,5 +1,5 @@
 import { formatAmount, overallVerdict, summariseHeadToHead } from '@/analysis/head-to-head';
-import type { FieldComparison, HeadToHead, SpreadComparison, Verdict } from '@/analysis/head-to-head';
+import type { FieldComparison, HeadToHead, Overall, SpreadComparison, Verdict } from '@/analysis/head-to-head';
 import { SPREAD_METHOD } from '@/analysis/head-to-head';
 
 // Unit factors: NIST Special Publication 811 (2008), Appendix B.8 (exact): 1 yd = 0.9144 m,
@@ -120,7 +120,7 @@ describe('overallVerdict', () => {
 });
 
 describe('summariseHeadToHead', () => {
-  const overall = { verdict: 'unclear', betterA: [], betterB: [], text: 'Overall: …' } as const;
+  const overall: Overall = { verdict: 'unclear', betterA: [], betterB: [], text: 'Overall: …' };
 
   it('summariseHeadToHead words a clear difference of each field it speaks of, up and down', () => {
     const up = parts({
