@@ -144,6 +144,9 @@ describe('compareBuilds', () => {
     expect(h.fields.carry!.df).toBeCloseTo(2, 12);
     // The spread rule needs three values in each build.
     expect(h.spread.fields.carry).toBeUndefined();
+    const five = [140, 141, 143, 146, 150];
+    expect(compareBuilds({ club: '7I', build: 'A', columns: { carry: [150, 152] } }, { club: '7I', build: 'B', columns: { carry: five } }).spread.fields.carry).toBeUndefined();
+    expect(compareBuilds({ club: '7I', build: 'A', columns: { carry: five } }, { club: '7I', build: 'B', columns: { carry: [150, 152] } }).spread.fields.carry).toBeUndefined();
   });
 
   // Welch, Biometrika 34 (1947): with one variance 0 the Welch–Satterthwaite df is n − 1 of the other.

@@ -161,6 +161,10 @@ describe('summariseHeadToHead', () => {
   it('summariseHeadToHead words a spread as ±1.96 sd of each build, wider or tighter, after the build’s name when alone', () => {
     const h = parts({}, { carry: spread(-1, 'clear', 5 * YD, 10 * YD) });
     expect(summariseHeadToHead({ ...h, overall }, 'imperial')).toBe('Birch: carry spread ±9.8 vs ±19.6 yd, tighter (clear). Overall: …');
+    const both = parts({}, { offline: spread(1, 'clear', 10 * YD, 5 * YD), carry: spread(-1, 'clear', 5 * YD, 10 * YD) });
+    expect(summariseHeadToHead({ ...both, overall }, 'imperial')).toBe(
+      'Birch: left–right spread ±19.6 vs ±9.8 yd, wider (clear); carry spread ±9.8 vs ±19.6 yd, tighter (clear). Overall: …',
+    );
     const wide = parts({ carry: mean(6 * YD, 'clear') }, { offline: spread(1, 'clear', 10, 5) });
     expect(summariseHeadToHead({ ...wide, overall }, 'metric')).toBe('Birch carries 5.5 m farther (clear); left–right spread ±19.6 vs ±9.8 m, wider (clear). Overall: …');
   });
