@@ -131,6 +131,87 @@ describe('compareBuilds', () => {
     expect(h.ovalAreaRatio).toBeNull();
   });
 
+  it('compareBuilds skips missing values (NaN) and gives the NAG g07ca results all the same', () => {
+    const carry = compareBuilds({ ...a, columns: { carry: [Number.NaN, ...a.columns.carry, Number.NaN] } }, b).fields.carry!;
+    expect(carry.t).toBeCloseTo(2.5922, 4);
+    expect(carry.df).toBeCloseTo(7.9925, 4);
+  });
+
+  // Closed form, Welch (1947) with equal n and sd: t = d/sqrt(2s²/n), df = 2(n − 1).
+  it('compareBuilds with two values in each build compares them: t = 10/√2, df 2', () => {
+    const h = compareBuilds({ club: '7I', build: 'A', columns: { carry: [150, 152] } }, { club: '7I', build: 'B', columns: { carry: [140, 142] } });
+    expect(h.fields.carry!.t).toBeCloseTo(10 / Math.SQRT2, 12);
+    expect(h.fields.carry!.df).toBeCloseTo(2, 12);
+    // The spread rule needs three values in each build.
+    expect(h.spread.fields.carry).toBeUndefined();
+    const five = [140, 141, 143, 146, 150];
+    expect(compareBuilds({ club: '7I', build: 'A', columns: { carry: [150, 152] } }, { club: '7I', build: 'B', columns: { carry: five } }).spread.fields.carry).toBeUndefined();
+    expect(compareBuilds({ club: '7I', build: 'A', columns: { carry: five } }, { club: '7I', build: 'B', columns: { carry: [150, 152] } }).spread.fields.carry).toBeUndefined();
+  });
+
+  // Welch, Biometrika 34 (1947): with one variance 0 the Welch–Satterthwaite df is n − 1 of the other.
+  it('compareBuilds with no spread in one build compares the means with the other build’s n − 1 degrees of freedom', () => {
+    const flat = { club: '7I', build: 'A', columns: { carry: [150, 150, 150] } };
+    const varied = { club: '7I', build: 'B', columns: { carry: [140, 142, 144, 146] } };
+    expect(compareBuilds(flat, varied).fields.carry!.df).toBeCloseTo(3, 12);
+    expect(compareBuilds(varied, flat).fields.carry!.df).toBeCloseTo(3, 12);
+    // With no spread in B the sd ratio A/B is infinite: no spread comparison.
+    expect(compareBuilds(varied, flat).spread.fields.carry).toBeUndefined();
+  });
+
+  it('compareBuilds with no spread in either build leaves the field out', () => {
+    const h = compareBuilds({ club: '7I', build: 'A', columns: { carry: [150, 150, 150] } }, { club: '7I', build: 'B', columns: { carry: [140, 140, 140] } });
+    expect(h.fields.carry).toBeUndefined();
+  });
+
+  // Three values each: A's deviations from its median 2 are 1, 0, 2 (mean 1), B's from 20 are 10, 0, 20 (mean 10).
+  it('compareBuilds with three values in each build compares their spread', () => {
+    const h = compareBuilds({ club: '7I', build: 'A', columns: { carry: [1, 2, 4] } }, { club: '7I', build: 'B', columns: { carry: [10, 20, 40] } });
+    expect(h.spread.fields.carry!.deviationA).toBeCloseTo(1, 12);
+    expect(h.spread.fields.carry!.deviationB).toBeCloseTo(10, 12);
+  });
+
+  // Every shot exactly 1 from its build's median: the deviations have no spread, the
+  // Brown–Forsythe statistic is 0/0, and the spread is left out while the means are compared.
+  it('compareBuilds with deviations from the median all equal leaves the spread out', () => {
+    const h = compareBuilds({ club: '7I', build: 'A', columns: { carry: [149, 151, 149, 151] } }, { club: '7I', build: 'B', columns: { carry: [139, 141, 139, 141] } });
+    expect(h.fields.carry!.diff).toBeCloseTo(10, 12);
+    expect(h.spread.fields.carry).toBeUndefined();
+  });
+
+  // A shear (x, y) → (x, y + x) has determinant 1, so it keeps the oval's area (closed form:
+  // the covariance becomes [[xx, xx + xy], [xx + xy, yy + 2xy + xx]] with the same determinant).
+  it('compareBuilds of an oval sheared along carry gives an area ratio of 1', () => {
+    const offline = [-1, 1, -1, 1];
+    const h = compareBuilds(
+      { club: '7I', build: 'A', columns: { offline, carry: [-1, -1, 1, 1] } },
+      { club: '7I', build: 'B', columns: { offline, carry: [-2, 0, 0, 2] } },
+    );
+    expect(h.ovalAreaRatio).toBeCloseTo(1, 12);
+  });
+
+  it('compareBuilds leaves a shot out of the oval when its offline or carry is missing', () => {
+    const offline = [-4, 1, 3, 0, -2, 5];
+    const carry = [148, 151, 150, 153, 146, 149];
+    const h = compareBuilds(
+      { club: '7I', build: 'A', columns: { offline: [...offline, Number.NaN, 40], carry: [...carry, 120, Number.NaN] } },
+      { club: '7I', build: 'B', columns: { offline: offline.map((x) => 2 * x), carry: carry.map((y) => 2 * y) } },
+    );
+    expect(h.ovalAreaRatio).toBeCloseTo(0.25, 12);
+  });
+
+  it('compareBuilds needs three shots with offline and carry for an oval, and B’s oval must have an area', () => {
+    const three = { offline: [0, 2, 1], carry: [150, 150, 154] };
+    const h3 = compareBuilds({ club: '7I', build: 'A', columns: three }, { club: '7I', build: 'B', columns: { offline: [0, 4, 2], carry: [150, 150, 158] } });
+    // B is A scaled by 2 about (0, 150): area ratio 1/4.
+    expect(h3.ovalAreaRatio).toBeCloseTo(0.25, 12);
+    const two = compareBuilds({ club: '7I', build: 'A', columns: { offline: [0, 2], carry: [150, 152] } }, { club: '7I', build: 'B', columns: three });
+    expect(two.ovalAreaRatio).toBeNull();
+    // B's shots on one line: a degenerate oval (determinant 0), no ratio.
+    const line = compareBuilds({ club: '7I', build: 'A', columns: three }, { club: '7I', build: 'B', columns: { offline: [0, 1, 2], carry: [150, 151, 152] } });
+    expect(line.ovalAreaRatio).toBeNull();
+  });
+
   it('compareBuilds result survives a JSON round trip unchanged', () => {
     const h = compareBuilds(a, b);
     expect(JSON.parse(JSON.stringify(h))).toEqual(h);

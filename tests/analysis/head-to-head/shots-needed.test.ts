@@ -32,6 +32,7 @@ describe('moreShotsNeeded', () => {
 
   it('moreShotsNeeded with one shot in a group throws', () => {
     expect(() => moreShotsNeeded({ nA: 1, nB: 5, sdA: 1, sdB: 1, diff: 1 })).toThrow(RangeError);
+    expect(() => moreShotsNeeded({ nA: 5, nB: 1, sdA: 1, sdB: 1, diff: 1 })).toThrow('moreShotsNeeded needs at least two shots in each group');
   });
 });
 
@@ -49,6 +50,12 @@ describe('shotsToSettle', () => {
     expect(shotsToSettle({ nA: 500, nB: 500, sdA: 1, sdB: 1, diff: 0.1, margin: 3 })).toBe(1);
   });
   it('shotsToSettle with a margin of 0 throws', () => {
-    expect(() => shotsToSettle({ nA: 5, nB: 5, sdA: 1, sdB: 1, diff: 0.1, margin: 0 })).toThrow(RangeError);
+    expect(() => shotsToSettle({ nA: 5, nB: 5, sdA: 1, sdB: 1, diff: 0.1, margin: 0 })).toThrow('shotsToSettle needs a positive margin');
+  });
+  // Two shots each is enough to ask: 7.84888·2/1² = 15.7 → 16 per build, 14 more after 2.
+  it('shotsToSettle with two shots in each group answers, with one in either it throws', () => {
+    expect(shotsToSettle({ nA: 2, nB: 2, sdA: 1, sdB: 1, diff: 1, margin: 0.5 })).toBe(14);
+    expect(() => shotsToSettle({ nA: 1, nB: 5, sdA: 1, sdB: 1, diff: 0.1, margin: 1 })).toThrow('shotsToSettle needs at least two shots in each group');
+    expect(() => shotsToSettle({ nA: 5, nB: 1, sdA: 1, sdB: 1, diff: 0.1, margin: 1 })).toThrow('shotsToSettle needs at least two shots in each group');
   });
 });

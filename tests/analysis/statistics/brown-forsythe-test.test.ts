@@ -81,3 +81,31 @@ describe('spreadDifference', () => {
     );
   });
 });
+
+describe('brownForsytheTest at its edges', () => {
+  it('brownForsytheTest skips missing values: GEAR with NaN added still gives W = 1.705910', () => {
+    const r = brownForsytheTest(GEAR.map((g, i) => (i === 0 ? [Number.NaN, ...g, Number.POSITIVE_INFINITY] : g)));
+    expect(Math.abs(r.w - 1.70591)).toBeLessThan(1e-5);
+    expect([r.df1, r.df2]).toEqual([9, 90]);
+  });
+
+  // Closed form: [1, 3] has deviations 1, 1 from its median 2 (mean 1); [0, 4, 6] has 4, 0, 2 from
+  // 4 (mean 2). Grand mean 8/5; between 2·0.6² + 3·0.4² = 1.2; within 0 + 8 = 8;
+  // W = (5 − 2)/(2 − 1)·1.2/8 = 0.45 with 1 and 3 df.
+  it('brownForsytheTest with a group of two values works: W = 0.45 with 1 and 3 df', () => {
+    const r = brownForsytheTest([[1, 3], [0, 4, 6]]);
+    expect(r.w).toBeCloseTo(0.45, 12);
+    expect([r.df1, r.df2]).toEqual([1, 3]);
+  });
+
+  it('brownForsytheTest says what is missing: groups, values, spread', () => {
+    expect(() => brownForsytheTest([[1, 2, 3]])).toThrow('brownForsytheTest needs at least two groups');
+    expect(() => brownForsytheTest([[1, 2, 3], [4]])).toThrow('brownForsytheTest needs at least two values in every group');
+    // Every value 1 from its group's median: the deviations have no spread (W would be 0/0).
+    expect(() => brownForsytheTest([[1, 3], [5, 7]])).toThrow('brownForsytheTest needs some spread in the deviations');
+  });
+
+  it('spreadDifference with a level of 0, 1 or above 1 says the level must lie in (0, 1)', () => {
+    for (const level of [0, 1, 1.5]) expect(() => spreadDifference([1, 5, 9], [2, 3, 7], level)).toThrow('spreadDifference: level must lie in (0, 1)');
+  });
+});

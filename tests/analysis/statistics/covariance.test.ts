@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { sampleCovariance as ssCovariance, sampleVariance } from 'simple-statistics';
 import { sampleCovariance2 } from '@/analysis/statistics';
+import { NUM_ACC_3 } from './nist-datasets';
 
 // NIST/SEMATECH e-Handbook of Statistical Methods, §6.5.4.1, example: five observations of three
 // variables → mean (4.10, 2.08, 0.604), covariance [[0.025, 0.0075, 0.00175],
@@ -48,5 +49,24 @@ describe('sampleCovariance2', () => {
         expect(c.yy).toBeCloseTo(sampleVariance(y), 7);
       }),
     );
+  });
+});
+
+describe('sampleCovariance2 on hard data and at its edges', () => {
+  // NIST StRD NumAcc3 (certified sd 0.1 about a mean of 1000000.2): paired with itself, the
+  // variances and the covariance are all the certified variance 0.01 (9 digits, as the mean test).
+  it('sampleCovariance2 of NIST NumAcc3 with itself gives the certified variance 0.01 everywhere', () => {
+    const c = sampleCovariance2(NUM_ACC_3.data, NUM_ACC_3.data);
+    for (const v of [c.xx, c.xy, c.yy]) expect(Math.abs(v - 0.01) / 0.01).toBeLessThan(1e-9);
+  });
+
+  // Closed form: x = 1, 2, 3 (the shorter column) and y = 2, 4, 6 → var x 1, cov 2, var y 4.
+  it('sampleCovariance2 of columns of different lengths uses the shorter', () => {
+    expect(sampleCovariance2([1, 2, 3], [2, 4, 6, 100])).toMatchObject({ n: 3, xx: 1, xy: 2, yy: 4 });
+    expect(sampleCovariance2([1, 2, 3, 100], [2, 4, 6])).toMatchObject({ n: 3, xx: 1, xy: 2, yy: 4 });
+  });
+
+  it('sampleCovariance2 on one pair says it needs two', () => {
+    expect(() => sampleCovariance2([1], [2])).toThrow('sampleCovariance2 needs at least two pairs');
   });
 });

@@ -90,3 +90,21 @@ describe('Student t and normal', () => {
     expect(() => studentTQuantile(0.9, 0)).toThrow(RangeError);
   });
 });
+
+describe('distribution functions at their edges', () => {
+  it('each distribution function names itself and the bad argument when it throws', () => {
+    expect(() => chiSquare2Quantile(1)).toThrow('chiSquare2Quantile: probability must lie in (0, 1), got 1');
+    expect(() => fQuantile2(8, 0)).toThrow('fQuantile2: probability must lie in (0, 1), got 0');
+    expect(() => fQuantile2(0, 0.5)).toThrow('fQuantile2: degrees of freedom must be positive, got 0');
+    expect(() => studentTCdf(1, -1)).toThrow('studentTCdf: degrees of freedom must be positive, got -1');
+    expect(() => studentTQuantile(1.5, 5)).toThrow('studentTQuantile: probability must lie in (0, 1), got 1.5');
+    expect(() => studentTQuantile(0.5, 0)).toThrow('studentTQuantile: degrees of freedom must be positive, got 0');
+    expect(() => fCdf(1, 0, 5)).toThrow('fCdf: degrees of freedom must be positive, got 0');
+    expect(() => fCdf(1, 5, Number.POSITIVE_INFINITY)).toThrow('fCdf: degrees of freedom must be positive, got Infinity');
+    expect(() => normalQuantile(0)).toThrow('normalQuantile: probability must lie in (0, 1), got 0');
+  });
+  // A distribution function is 1 at +∞ (closed form; jstat itself gives NaN there).
+  it('fCdf at +∞ gives 1', () => {
+    expect(fCdf(Number.POSITIVE_INFINITY, 2, 5)).toBe(1);
+  });
+});

@@ -78,3 +78,9 @@ describe('meanVariance', () => {
     );
   });
 });
+
+describe('meanVariance on nothing', () => {
+  it('meanVariance on an empty run says it needs a value', () => {
+    expect(() => meanVariance([])).toThrow('meanVariance needs at least one value');
+  });
+});

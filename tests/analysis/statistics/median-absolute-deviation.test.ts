@@ -30,3 +30,20 @@ describe('robustSpreadInPlace', () => {
     );
   });
 });
+
+describe('robustSpreadInPlace at its edges', () => {
+  // Closed form: five zeros, 1, 1, 1 and 1e16 have median 0 and MAD 0; the mean absolute
+  // deviation is (1e16 + 3)/9 = 1111111111111111.44…, whose nearest double is
+  // 1111111111111111.5 (doubles there are 0.125 apart). Summed in sorted order the small values
+  // count whatever order the shots came in; summed with 1e16 first, each 1 is lost to rounding.
+  it('robustSpreadInPlace gives the correctly rounded mean absolute deviation in any order of the input', () => {
+    const values = [0, 0, 0, 0, 0, 1e16, 1, 1, 1];
+    for (const order of [values, [...values].reverse(), [1, 1, 1, 1e16, 0, 0, 0, 0, 0]]) {
+      expect(robustSpreadInPlace(Float64Array.from(order)).meanAbsoluteDeviation).toBe(1111111111111111.5);
+    }
+  });
+  it('robustSpreadInPlace says what is wrong: no values, a short scratch', () => {
+    expect(() => robustSpreadInPlace(new Float64Array(0))).toThrow('robustSpreadInPlace needs at least one value');
+    expect(() => robustSpreadInPlace(Float64Array.of(1, 2, 3), 3, new Float64Array(2))).toThrow('scratch is shorter than the values');
+  });
+});

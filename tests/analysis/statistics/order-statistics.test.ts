@@ -52,3 +52,10 @@ describe('medianInPlace', () => {
     );
   });
 });
+
+describe('order statistics on nothing', () => {
+  it('orderStatisticsInPlace and medianInPlace on no values say they need one', () => {
+    expect(() => orderStatisticsInPlace(new Float64Array(0))).toThrow('orderStatisticsInPlace needs at least one value');
+    expect(() => medianInPlace(new Float64Array(0))).toThrow('medianInPlace needs at least one value');
+  });
+});

@@ -45,3 +45,13 @@ describe('summarize', () => {
     expect(summarizeInPlace(Float64Array.of(1, 2, 3, 99), 3).mean).toBe(2);
   });
 });
+
+describe('summarize at its edges', () => {
+  // Closed form: 1 and 3 have sample sd √((1 + 1)/1) = √2.
+  it('summarize on two values gives the sample sd √2', () => {
+    expect(summarize([1, 3]).sd).toBeCloseTo(Math.SQRT2, 15);
+  });
+  it('summarize on only missing values says it needs a finite one', () => {
+    expect(() => summarize([Number.NaN, Number.POSITIVE_INFINITY])).toThrow('summarize needs at least one finite value');
+  });
+});

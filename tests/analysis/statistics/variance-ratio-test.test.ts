@@ -23,3 +23,17 @@ describe('varianceRatioTest', () => {
     expect(() => varianceRatioTest({ n: 3, mean: 0, sd: 1 }, { n: 3, mean: 0, sd: 0 })).toThrow(RangeError);
   });
 });
+
+describe('varianceRatioTest at its edges', () => {
+  // Closed form: F = sA²/sB² = 4 with (1, 1) df; two values each are enough.
+  it('varianceRatioTest with two values in each sample gives F = 4 with 1 and 1 df', () => {
+    expect(varianceRatioTest({ n: 2, mean: 0, sd: 2 }, { n: 2, mean: 0, sd: 1 })).toMatchObject({ f: 4, df1: 1, df2: 1 });
+  });
+  it('varianceRatioTest with one value in either sample says it needs two', () => {
+    expect(() => varianceRatioTest({ n: 1, mean: 0, sd: 1 }, { n: 5, mean: 0, sd: 1 })).toThrow('varianceRatioTest needs at least two values in each sample');
+    expect(() => varianceRatioTest({ n: 5, mean: 0, sd: 1 }, { n: 1, mean: 0, sd: 1 })).toThrow('varianceRatioTest needs at least two values in each sample');
+  });
+  it('varianceRatioTest with no spread in B says so', () => {
+    expect(() => varianceRatioTest({ n: 5, mean: 0, sd: 1 }, { n: 5, mean: 0, sd: 0 })).toThrow('varianceRatioTest needs a spread in sample B');
+  });
+});

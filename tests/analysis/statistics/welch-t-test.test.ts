@@ -42,3 +42,31 @@ describe('welchTTest', () => {
     expect(() => welchTTest({ n: 3, mean: 1, sd: 0 }, { n: 3, mean: 2, sd: 0 })).toThrow(RangeError);
   });
 });
+
+describe('welchTTest at its edges', () => {
+  // Closed form with n 2 and 2, sd √2 each: se = √(1 + 1), t = 10/√2, df = 2(n − 1) = 2 (Welch 1947).
+  it('welchTTest with two values in each sample gives t = 10/√2 with 2 df', () => {
+    const r = welchTTest({ n: 2, mean: 151, sd: Math.SQRT2 }, { n: 2, mean: 141, sd: Math.SQRT2 });
+    expect(r.t).toBeCloseTo(10 / Math.SQRT2, 12);
+    expect(r.df).toBeCloseTo(2, 12);
+  });
+  it('welchTTest with one value in either sample says it needs two', () => {
+    expect(() => welchTTest({ n: 1, mean: 1, sd: 1 }, { n: 5, mean: 1, sd: 1 })).toThrow('welchTTest needs at least two values in each sample');
+    expect(() => welchTTest({ n: 5, mean: 1, sd: 1 }, { n: 1, mean: 1, sd: 1 })).toThrow('welchTTest needs at least two values in each sample');
+  });
+  it('welchTTest with a level of 0, 1 or above 1 says the level must lie in (0, 1)', () => {
+    for (const level of [0, 1, 1.5]) {
+      expect(() => welchTTest({ n: 4, mean: 25, sd: 0.8185 }, { n: 8, mean: 21, sd: 4.2083 }, level)).toThrow('welchTTest: level must lie in (0, 1)');
+    }
+  });
+  // Normal table (NIST/SEMATECH e-Handbook §1.3.6.7.1): z(0.95) = 1.644854, the limit of Student's t
+  // as df grows, so a 90% interval of a difference with a huge df is diff ± 1.644854·se.
+  it('welchTTest at level 0.9 gives the 90% interval', () => {
+    const r = welchTTest({ n: 1e7, mean: 10, sd: 3 }, { n: 1e7, mean: 4, sd: 4 }, 0.9);
+    const se = Math.sqrt(9 / 1e7 + 16 / 1e7);
+    expect(r.ci[1] - r.diff).toBeCloseTo(1.644854 * se, 7);
+  });
+  it('welchTTest with no spread in either sample says so', () => {
+    expect(() => welchTTest({ n: 3, mean: 1, sd: 0 }, { n: 3, mean: 2, sd: 0 })).toThrow('welchTTest needs a spread in at least one sample');
+  });
+});

@@ -73,3 +73,31 @@ describe('strayFormatterFor', () => {
     expect(strayFormatterFor('metric')(10, 'ballSpeed')).toBe('36.0 km/h');
   });
 });
+
+describe('describeStrayFlag signs and directions', () => {
+  it('describeStrayFlag writes a modified z that rounds to 0.0 without a sign', () => {
+    expect(describeStrayFlag({ rule: 'smashFactor', kind: 'mishit', value: 1.3, median: 1.3, modifiedZ: -0.04, madUsed: 0.01, floored: true })).toBe(
+      "smash factor 1.30, far below this group's 1.30 (modified z 0.0)",
+    );
+  });
+  it('describeStrayFlag on a launch far below says far below, with a minus sign', () => {
+    expect(describeStrayFlag({ rule: 'launchAngle', kind: 'mishit', value: 2.1, median: 12.2, modifiedZ: -6.81, madUsed: 1, floored: true })).toBe(
+      "launch 2.1°, far below this group's 12.2° (modified z −6.8)",
+    );
+  });
+  it('describeStrayFlag on a shot far right says right, the distance in the units asked for', () => {
+    const text = describeStrayFlag({ rule: 'ground', kind: 'review', direction: 'right', distance: 9.04, limit: 6.77, offlineFromCenterM: 30 * YD, carryFromCenterM: 2 }, imperial);
+    expect(text).toBe("a directional miss 30 yd right of this group's pattern: the player's dispersion (robust distance 9.0, limit 6.8)");
+  });
+});
+
+describe('describeStray kinds', () => {
+  it('describeStray of a misread and of a shot for review starts with the kind’s word; review says it stays in', () => {
+    expect(describeStray({ row: 2, index: 1, kind: 'misread', flags: [{ rule: 'misread', kind: 'misread', field: 'smashFactor', value: 1.62, limit: 1.538 }] })).toBe(
+      'Misread: smash factor 1.62 is more than the impact of this club allows (at most 1.54, measurement error allowed)',
+    );
+    expect(
+      describeStray({ row: 3, index: 2, kind: 'review', flags: [{ rule: 'ground', kind: 'review', direction: 'short', distance: 8, limit: 6.77, offlineFromCenterM: 0, carryFromCenterM: -30 }] }),
+    ).toBe("For review: lands 30 m short of this group's pattern (robust distance 8.0, limit 6.8); kept in the figures unless you drop it");
+  });
+});
