@@ -62,7 +62,8 @@ describe('integrateTrajectory sideways', () => {
 
 describe('the ranges the published formulas are stated for', () => {
   it('the troposphere of the standard atmosphere runs from −5,000 m to the tropopause at 11,000 m (ISO 2533:1975)', () => {
-    // ISO 2533:1975 Table 4 (and the ICAO standard atmosphere): 22,632 Pa at 11,000 m
+    // the tropopause of the standard atmosphere (ISO 2533:1975; ICAO Doc 7488): 22,632 Pa at 11,000 m (value from memory; the
+    // closed form p0·(T11/T0)^(g0·M/(R·L)) with p0 = 101,325 Pa, T0 = 288.15 K, L = 0.0065 K/m gives it to the pascal)
     expect(isaPressurePa(11_000)).toBeCloseTo(22_632, -1);
     expect(Number.isFinite(isaPressurePa(-5_000))).toBe(true);
     expect(() => isaPressurePa(-5_001)).toThrow('altitude -5001 m is outside the troposphere model (-5000–11000 m)');
