@@ -5,7 +5,6 @@ import { fittingBodySchema, fittingListQuerySchema, fittingUpdateSchema, idParam
 import { fittingLink, notify } from '../services/fitting-notices';
 import { createFitting, getFitting, listFittings, updateFitting } from '../services/fittings';
 import type { Mailer } from '../services/mailer';
-import { Fitting } from '../models';
 
 export function fittingsRouter(config: Config, mailer: Mailer): Router {
   const router = Router();
@@ -19,10 +18,7 @@ export function fittingsRouter(config: Config, mailer: Mailer): Router {
     const fitting = await createFitting(actorOf(res), fittingBodySchema.parse(req.body));
     // a remote fitting opened by the staff concerns the player: tell them what to send (a notice never fails the request)
     if (fitting.remote) {
-      const row = await Fitting.findByPk(fitting.id);
-      if (row) {
-        await notify(mailer, row, 'player', 'Your fitter opened a remote fitting', ['Your fitter opened a remote fitting for you.', 'Answer the intake, add your clubs to your bag and send your launch-monitor files.'], fittingLink(appUrl(req), fitting.id));
-      }
+      await notify(mailer, fitting, 'player', 'Your fitter opened a remote fitting', ['Your fitter opened a remote fitting for you.', 'Answer the intake, add your clubs to your bag and send your launch-monitor files.'], fittingLink(appUrl(req), fitting.id));
     }
     res.status(201).json(fitting);
   });

@@ -8,7 +8,7 @@ import type { Conditions } from '../../analysis/flight';
 import { recipeSchema, type Recipe } from '../../analysis/import';
 import { HttpError, notFound } from '../errors';
 import type { Hand } from '../../analysis/plain-words/handed-words';
-import { BayFile, Build, Fitting, Player, Recipe as RecipeModel } from '../models';
+import { BayFile, Build, Fitting, Recipe as RecipeModel } from '../models';
 import { specOf } from '../models/spec-attributes';
 import type { BayFile as BayFileDto, ImportReport, SavedRecipe, buildSpecBodySchema, importOptionsSchema } from '../schemas';
 import type { z } from 'zod';
@@ -71,18 +71,15 @@ export function airOf(fitting: Pick<Fitting, 'temperatureC' | 'altitudeM' | 'hum
 }
 
 const recipeNameTaken = () => new HttpError(409, 'RECIPE_NAME_TAKEN', 'Your shop already has a recipe with that name.');
-/** The hand of the fitting's player (columns a file writes for the player's hand turn round for a left-hander). */
-async function handOf(fitting: Pick<Fitting, 'playerId'>): Promise<Hand> {
-  const player = await Player.findByPk(fitting.playerId, { attributes: ['handedness'] });
-  return player?.handedness ?? 'right';
-}
+/** The hand of the fitting's player, loaded with the fitting (columns a file writes for the player's hand turn round for a left-hander). */
+const handOf = (fitting: Fitting): Hand => fitting.player?.handedness ?? 'right';
 
 const duplicateFile = () => new HttpError(409, 'DUPLICATE_FILE', 'This exact file is already imported into this fitting.');
 
 /** What an import would do: the mapping, warnings, the first converted rows, the rejected rows. Stores nothing. */
 export async function previewBayFile(pool: ImportPool, actor: Actor, fittingId: string, file: UploadedFile, options: ParsedImportOptions, limits: BayFileLimits) {
   const fitting = await findWritableFitting(actor, fittingId);
-  const hand = await handOf(fitting);
+  const hand = handOf(fitting);
   const result = await pool.run({ bytes: file.buffer, recipe: await recipeOf(actor, options), builds: options.builds, limits, air: airOf(fitting), hand, store: false });
   const duplicate = await BayFile.findOne({ where: { fittingId, contentHash: result.contentHash }, attributes: ['id', 'fileName'] });
   // the rule commit applies: a taken recipe name is refused, so the preview says so first
@@ -161,7 +158,7 @@ export async function commitBayFile(
   hooks: CommitHooks = {},
 ): Promise<BayFileDto> {
   const fitting = await findWritableFitting(actor, fittingId);
-  const result: ImportTaskResult = await pool.run({ bytes: file.buffer, recipe: await recipeOf(actor, options), builds: options.builds, limits, air: airOf(fitting), hand: await handOf(fitting), store: true });
+  const result: ImportTaskResult = await pool.run({ bytes: file.buffer, recipe: await recipeOf(actor, options), builds: options.builds, limits, air: airOf(fitting), hand: handOf(fitting), store: true });
   const table = result.table!;
   if (table.count === 0) {
     throw new HttpError(400, 'NO_SHOTS', 'No row of this file could be imported; nothing was stored. See the rejected rows in the preview.');
@@ -248,7 +245,7 @@ export async function remapBayFile(sequelize: Sequelize, pool: ImportPool, actor
   if (!isStaff(actor) && bayFile.uploadedBy !== actor.id) {
     throw new HttpError(403, 'FORBIDDEN', 'Only the fitter, or whoever uploaded this file, may change its mapping.');
   }
-  const result = await pool.run({ text: bayFile.rawText, recipe, builds, limits, air: airOf(fitting), hand: await handOf(fitting), store: true });
+  const result = await pool.run({ text: bayFile.rawText, recipe, builds, limits, air: airOf(fitting), hand: handOf(fitting), store: true });
   const table = result.table!;
   if (table.count === 0) throw new HttpError(400, 'NO_SHOTS', 'With this recipe no row could be imported; the file was left as it was.');
   await withDeadlockRetry(() =>

@@ -9,7 +9,7 @@ import type { Mailer } from './mailer';
 export type Side = 'player' | 'staff';
 
 /** Addresses of one side of a fitting. */
-export async function addressesOf(fitting: Fitting, side: Side): Promise<string[]> {
+export async function addressesOf(fitting: Pick<Fitting, 'playerId' | 'fitterId' | 'shopId'>, side: Side): Promise<string[]> {
   if (side === 'player') {
     const player = await Player.findByPk(fitting.playerId, { attributes: ['email', 'userId'] });
     if (player?.email) return [player.email];
@@ -23,7 +23,7 @@ export async function addressesOf(fitting: Fitting, side: Side): Promise<string[
 }
 
 /** Sends one notice to a side of a fitting; failures are logged, not thrown. */
-export async function notify(mailer: Mailer, fitting: Fitting, side: Side, subject: string, lines: string[], link: string): Promise<void> {
+export async function notify(mailer: Mailer, fitting: Pick<Fitting, 'playerId' | 'fitterId' | 'shopId'>, side: Side, subject: string, lines: string[], link: string): Promise<void> {
   try {
     const [to, ...cc] = await addressesOf(fitting, side);
     if (!to) return;

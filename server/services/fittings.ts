@@ -14,7 +14,7 @@ import { unreadCounts } from './fitting-messages';
 const countShots = (ids: string[]) => countShotsByFitting(FittingModel.sequelize!, ids);
 
 const include = [
-  { model: Player, as: 'player', attributes: ['id', 'name'] },
+  { model: Player, as: 'player', attributes: ['id', 'name', 'handedness'] },
   { model: User, as: 'fitter', attributes: ['id', 'name'] },
 ];
 
