@@ -37,6 +37,8 @@ interface RefFlag {
   direction?: string;
   modifiedZ?: number;
   median?: number;
+  madUsed?: number;
+  floored?: boolean;
 }
 interface RefShot {
   row: number;
@@ -90,6 +92,7 @@ function referenceStrays(input: StrayInput): RefShot[] {
     const far: Partial<Record<Field, boolean[]>> = {};
     const zOf: Partial<Record<Field, number[]>> = {};
     const medianOf: Partial<Record<Field, number[]>> = {};
+    const scaleOf: Partial<Record<Field, { mad: number; floored: boolean }[]>> = {};
     for (const field of FIELDS) {
       const values = columns[field];
       if (!values) continue;
@@ -102,19 +105,23 @@ function referenceStrays(input: StrayInput): RefShot[] {
       const whole = scale(counted, field)!;
       const z: number[] = [];
       const med: number[] = [];
+      const used: { mad: number; floored: boolean }[] = [];
       for (let i = 0; i < n; i++) {
         if (!Number.isFinite(values[i])) {
           z.push(Number.NaN);
           med.push(Number.NaN);
+          used.push({ mad: Number.NaN, floored: false });
           continue;
         }
         const own = small && count > MIN_SHOTS_FOR_SCORE && Number.isFinite(counted[i]) ? scale(counted.filter((_, j) => j !== i), field)! : whole;
         z.push(own.mad > 0 ? (0.6745 * (values[i] - own.median)) / own.mad : 0);
         med.push(own.median);
+        used.push({ mad: own.mad, floored: own.floored });
       }
       const share = FAR_BELOW_SHARE[field];
       zOf[field] = z;
       medianOf[field] = med;
+      scaleOf[field] = used;
       worse[field] = z.map((v) => (!Number.isFinite(v) ? 0 : field === 'launchAngle' ? Math.abs(v) : Math.max(0, -v)));
       far[field] = values.map((v, i) => share !== undefined && v < (1 - share) * med[i]);
     }
@@ -138,7 +145,14 @@ function referenceStrays(input: StrayInput): RefShot[] {
       for (const field of FIELDS) {
         if (!worse[field]) continue;
         if (w(field, i) > SUPPORTING_Z_LIMIT || far[field]![i]) {
-          mishitFlags[i].push({ rule: field, kind: 'mishit', modifiedZ: zOf[field]![i], median: medianOf[field]![i] });
+          mishitFlags[i].push({
+            rule: field,
+            kind: 'mishit',
+            modifiedZ: zOf[field]![i],
+            median: medianOf[field]![i],
+            madUsed: scaleOf[field]![i].mad,
+            floored: scaleOf[field]![i].floored,
+          });
         }
       }
     }
@@ -253,7 +267,7 @@ function generatedSession(seed: number): StrayInput {
   return input;
 }
 
-/** The shots, kinds, rules and directions, with z and medians to 1e-9. */
+/** The shots, kinds, rules and directions, with z to 1e-6, medians and MADs to 1e-9, and whether the floor was used. */
 function summary(shots: { row: number; index: number; kind: string; flags: readonly object[] }[]): unknown {
   return shots.map((s) => ({
     row: s.row,
@@ -265,7 +279,14 @@ function summary(shots: { row: number; index: number; kind: string; flags: reado
         rule: g.rule,
         kind: g.kind,
         ...(g.direction ? { direction: g.direction } : {}),
-        ...(g.modifiedZ !== undefined ? { modifiedZ: Math.round(g.modifiedZ * 1e6) / 1e6, median: Math.round(g.median! * 1e9) / 1e9 } : {}),
+        ...(g.modifiedZ !== undefined
+          ? {
+              modifiedZ: Math.round(g.modifiedZ * 1e6) / 1e6,
+              median: Math.round(g.median! * 1e9) / 1e9,
+              madUsed: Math.round(g.madUsed! * 1e9) / 1e9,
+              floored: g.floored,
+            }
+          : {}),
       };
     }),
   }));
@@ -274,7 +295,7 @@ function summary(shots: { row: number; index: number; kind: string; flags: reado
 describe('findStrays agrees with a naive implementation of its written rules', () => {
   const sessions = Array.from({ length: 2000 }, (_, i) => generatedSession(i + 1));
 
-  it('on 2,000 generated sessions of 3–40 shots: the same shots, kinds, rules, directions, z and medians', () => {
+  it('on 2,000 generated sessions of 3–40 shots: the same shots, kinds, rules, directions, z, medians, MADs and floors', () => {
     let disagreements = 0;
     let firstSeed = 0;
     for (let i = 0; i < sessions.length; i++) {
