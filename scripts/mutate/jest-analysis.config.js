@@ -1,7 +1,7 @@
 // Jest for mutation testing (npm run mutate): the analysis project of jest.config.js as one flat
 // config (Stryker's Jest runner swaps in its own test environment, which needs a flat config).
 // Tests: the mirror of the mutated folder or file under tests/analysis (tests/analysis/strays
-// for analysis/strays, tests/analysis/units.test.ts for analysis/units.ts), plus the families
+// for analysis/strays, tests/analysis/units.test.ts and units-*.test.ts for analysis/units.ts), plus the families
 // that read it directly (units.ts: the import tests). A folder's own tests must catch its
 // mistakes; running all 700 analysis tests for every module-level mutant would take hours on two
 // cores. MUTATE_TESTS (comma-separated paths under tests/analysis) overrides the choice.
@@ -24,7 +24,7 @@ const target = (process.env.MUTATE_TARGET ?? 'analysis').replace(/\/+$/, '');
 const testMatch = testsFor(target).flatMap((t) =>
   t === '.'
     ? ['<rootDir>/tests/analysis/**/*.test.ts']
-    : [`<rootDir>/tests/analysis/${t}.test.ts`, `<rootDir>/tests/analysis/${t}/**/*.test.ts`],
+    : [`<rootDir>/tests/analysis/${t}.test.ts`, `<rootDir>/tests/analysis/${t}-*.test.ts`, `<rootDir>/tests/analysis/${t}/**/*.test.ts`],
 );
 
 module.exports = {
