@@ -296,17 +296,8 @@ describe('findStrays agrees with a naive implementation of its written rules', (
   const sessions = Array.from({ length: 2000 }, (_, i) => generatedSession(i + 1));
 
   it('on 2,000 generated sessions of 3–40 shots: the same shots, kinds, rules, directions, z, medians, MADs and floors', () => {
-    let disagreements = 0;
-    let firstSeed = 0;
-    for (let i = 0; i < sessions.length; i++) {
-      const same = JSON.stringify(summary(findStrays(sessions[i]))) === JSON.stringify(summary(referenceStrays(sessions[i])));
-      if (!same) {
-        disagreements++;
-        firstSeed ||= i + 1;
-      }
-    }
-    if (firstSeed) expect(summary(findStrays(sessions[firstSeed - 1]))).toEqual(summary(referenceStrays(sessions[firstSeed - 1])));
-    expect(disagreements).toBe(0);
+    // Stops at the first session that disagrees and shows it.
+    for (const session of sessions) expect(summary(findStrays(session))).toEqual(summary(referenceStrays(session)));
   });
 
   it('the generated sessions exercise every rule: misreads, mishits of each field, each direction on the ground, second looks and large groups', () => {
