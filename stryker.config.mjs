@@ -27,7 +27,9 @@ export default {
   clearTextReporter: { allowColor: false, logTests: false, maxTestsToLog: 0 },
   tempDirName: '.stryker-tmp',
   ignorePatterns: ['dist', '.data*', '.scratch*', '.expo', 'coverage', 'web-build'],
-  // A loaded shared machine: generous before a mutant counts as an endless loop
-  // (MUTATE_TIMEOUT_MS shortens it on a quiet machine: endless-loop mutants each wait it out).
+  // A loaded shared machine: generous before a mutant counts as an endless loop. MUTATE_TIMEOUT_MS
+  // shortens it (endless-loop mutants each wait it out), but only on a quiet machine with one run:
+  // two runs at once with 3 s made half the flight core's mutants "time out" that finish in time
+  // at 10 s, and a timeout counts as detected.
   timeoutMS: Number(process.env.MUTATE_TIMEOUT_MS ?? 10_000),
 };
