@@ -8,6 +8,8 @@ import {
   ballForces,
   GRASS_ROUGHNESS_M,
   integrateTrajectory,
+  modernBallDragCoefficient,
+  modernBallLiftCoefficient,
   resolveAir,
   WIND_REFERENCE_HEIGHT_M,
   type CoefficientModel,
@@ -133,6 +135,36 @@ describe('ballForces and the wind', () => {
     ballForces(resolveAir(), constant, axis).derivative(0.02, 50, -3, 1, 0, still);
     ballForces(resolveAir({ wind: { speedMps: 8, fromDeg: 30 } }), constant, axis).derivative(0.02, 50, -3, 1, 0, windy);
     expect([...windy]).toEqual([...still]);
+  });
+});
+
+describe('the lift force is the cross product of the spin axis and the air speed', () => {
+  // The Magnus force points along ω̂ × u (right-hand rule): perpendicular to the air speed and to the
+  // spin axis. With no drag, what the ball feels beyond gravity is k·|u|·CL·(ω̂ × u), every
+  // component of the cross product written out: (ωy·uz − ωz·uy, ωz·ux − ωx·uz, ωx·uy − ωy·ux).
+  it('for an axis and a velocity with all three components', () => {
+    const liftOnly: CoefficientModel = { name: 'lift only', source: 'test', dragCoefficient: () => 0, liftCoefficient: () => 0.2 };
+    const air = resolveAir();
+    const k = (air.densityKgM3 * BALL_AREA_M2) / (2 * BALL_MASS_KG);
+    const axis = { x: 0.2, y: 0.3, z: Math.sqrt(1 - 0.04 - 0.09) };
+    const [ux, uy, uz] = [50, 12, -7];
+    const out = new Float64Array(4);
+    ballForces(air, liftOnly, axis).derivative(1, ux, uy, uz, 0, out);
+    const f = k * Math.hypot(ux, uy, uz) * 0.2;
+    expect(out[0]).toBeCloseTo(f * (axis.y * uz - axis.z * uy), 10);
+    expect(out[1] + G).toBeCloseTo(f * (axis.z * ux - axis.x * uz), 10);
+    expect(out[2]).toBeCloseTo(f * (axis.x * uy - axis.y * ux), 10);
+    expect(out[0] * ux + (out[1] + G) * uy + out[2] * uz).toBeCloseTo(0, 9);
+  });
+});
+
+describe('the modern ball below zero spin', () => {
+  // The model is stated for S ≥ 0 (a spin ratio cannot be negative in flight: spin only decays);
+  // the functions take S < 0 as 0: drag at its no-spin value, no lift.
+  it('drag at S < 0 is the no-spin drag, lift is 0', () => {
+    expect(modernBallDragCoefficient(-0.1, 1.5e5)).toBe(0.2);
+    expect(modernBallDragCoefficient(-0.1, 4e4)).toBe(0.5);
+    expect(modernBallLiftCoefficient(-0.1)).toBe(0);
   });
 });
 
