@@ -188,6 +188,7 @@ describe('the ranges the published formulas are stated for', () => {
     expect(() => at(-0.0001)).toThrow(RangeError);
     expect(() => moistAirDensityKgM3(293.15, -1, 50)).toThrow('pressure -1 Pa is not valid');
     expect(() => moistAirDensityKgM3(293.15, 101_325, 101)).toThrow('humidity 101 % is outside 0–100 %');
+    expect(() => moistAirDensityKgM3(293.15, 101_325, -1)).toThrow('humidity -1 % is outside 0–100 %');
   });
 
   it('the saturation vapour pressure needs a temperature above absolute zero', () => {
