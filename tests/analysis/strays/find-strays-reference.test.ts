@@ -15,6 +15,7 @@
  */
 import { median as ssMedian, medianAbsoluteDeviation } from 'simple-statistics';
 import { smashFactorLimit } from '@/analysis/physics';
+import { seededRandom } from '@/fixtures/seeded-random';
 import {
   findStrays,
   groundDistanceLimit,
@@ -192,16 +193,6 @@ function referenceStrays(input: StrayInput): RefShot[] {
 
 // ---- generated sessions ----
 
-function random(seed: number): () => number {
-  let s = seed >>> 0;
-  return () => {
-    s = (s + 0x6d2b79f5) >>> 0;
-    let t = s;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 const normal = (r: () => number) => Math.sqrt(-2 * Math.log(r() + 1e-12)) * Math.cos(2 * Math.PI * r());
 
 const CLUBS = ['driver', '7-iron', 'hybrid-4', 'pitching-wedge', undefined];
@@ -209,7 +200,7 @@ const SIZES = [3, 4, 5, 6, 7, 8, 10, 12, 20, 30, 31, 40];
 
 /** One club's group: a player's normal strikes around invented centres, with mishits of every kind. */
 function generatedSession(seed: number): StrayInput {
-  const r = random(seed);
+  const r = seededRandom(seed);
   const n = SIZES[Math.floor(r() * SIZES.length)];
   const club = CLUBS[Math.floor(r() * CLUBS.length)];
   const speed0 = 50 + r() * 25;
