@@ -9,7 +9,9 @@
  * 1993; NIST/SEMATECH e-Handbook §1.3.5.17), each shot scored against the others in groups up to
  * 30 shots, O(n²) and with plain arrays. The ground rule's distances come from
  * robustGroundDistances, checked on its own against Gnanadesikan & Kettenring (1972); what is
- * checked here is which shots it sends to review and which way they are off.
+ * checked here is which shots it sends to review and which way they are off. The MAD floors
+ * (madFloor), the impact bound (smashFactorLimit) and the ground limit (groundDistanceLimit) are
+ * also the product's, each checked in its own tests.
  * The rule constants themselves (3.5, 2.8, the shares, the floors) are our choices, common
  * practice, no source; tests/analysis/strays/find-strays.test.ts checks them at their boundaries.
  */
