@@ -8,6 +8,7 @@ import {
   ballForces,
   GRASS_ROUGHNESS_M,
   integrateTrajectory,
+  launchVectors,
   modernBallDragCoefficient,
   modernBallLiftCoefficient,
   resolveAir,
@@ -206,5 +207,24 @@ describe('the ranges the published formulas are stated for', () => {
     expect(() => sutherlandViscosityPaS(-3)).toThrow(/-3 K/);
     expect(() => reynoldsNumber(1.2, 50, 0)).toThrow('viscosity 0 Pa·s is not positive');
     expect(() => spinDecayTimeConstantS(-2)).toThrow('speed -2 m/s is not positive');
+  });
+});
+
+describe('air and launch values at the ends of their ranges', () => {
+  // The air model takes −50 … 60 °C (our stated range, beyond any playable day), ends included.
+  it('a temperature of −50 °C and of 60 °C is taken; just outside is refused with its value and the range', () => {
+    expect(resolveAir({ temperatureC: -50 }).temperatureK).toBeCloseTo(223.15, 10);
+    expect(resolveAir({ temperatureC: 60 }).temperatureK).toBeCloseTo(333.15, 10);
+    expect(() => resolveAir({ temperatureC: -50.5 })).toThrow('temperature -50.5 °C is outside -50…60 °C');
+    expect(() => resolveAir({ temperatureC: 60.5 })).toThrow('temperature 60.5 °C is outside -50…60 °C');
+    expect(() => resolveAir({ wind: { speedMps: -1, fromDeg: 0 } })).toThrow('wind -1 m/s from 0° is not valid');
+  });
+
+  it('a ball at rest is a launch (speed 0 gives no velocity); a negative speed or spin, or a missing value, is refused by name', () => {
+    const still = launchVectors({ ballSpeedMps: 0, launchAngleDeg: 12, spinRateRpm: 0 });
+    expect([still.vxMps, still.vyMps, still.vzMps]).toEqual([0, 0, 0]);
+    expect(() => launchVectors({ ballSpeedMps: -1, launchAngleDeg: 12, spinRateRpm: 0 })).toThrow('ball speed -1 m/s is negative');
+    expect(() => launchVectors({ ballSpeedMps: 60, launchAngleDeg: 12, spinRateRpm: -5 })).toThrow('spin rate -5 rpm is negative');
+    expect(() => launchVectors({ ballSpeedMps: 60, launchAngleDeg: Number.NaN, spinRateRpm: 0 })).toThrow('launch angle NaN is not a finite number');
   });
 });
