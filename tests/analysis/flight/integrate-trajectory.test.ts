@@ -229,3 +229,30 @@ describe('integrateTrajectory', () => {
     expect(() => integrateTrajectory(hover, start(50, 20), { maxTimeS: 5 })).toThrow(/not landed/);
   });
 });
+
+describe('integrateTrajectory in a vacuum', () => {
+  // Under gravity alone the path is a parabola: RK4 integrates a constant acceleration exactly and a
+  // cubic Hermite segment reproduces a quadratic exactly, so the landing and the apex placed inside
+  // their step must agree with the textbook closed forms to rounding: range v²·sin 2θ / g, flight
+  // time 2·v·sin θ / g, apex height (v·sin θ)² / 2g at half the flight time, landing speed
+  // −v·sin θ upward. A root finder that stops short, or interpolates with a wrong slope, is off by
+  // more than 5·10⁻¹⁰.
+  it.each([
+    [70, 10, 0.2],
+    [60, 45, 0.2],
+    [40, 30, 0.13],
+    [70, 10, 0.01],
+    [75, 12, 0.2],
+    [30, 60, 0.2],
+  ])('%d m/s at %d° with a %d s step lands where the closed forms say, to 5e-10', (speed, deg, stepS) => {
+    const th = deg * DEG;
+    const vy = speed * Math.sin(th);
+    const r = integrateTrajectory(vacuum, start(speed, deg), { stepS });
+    const T = (2 * vy) / G;
+    expect(Math.abs(r.xM - (speed * speed * Math.sin(2 * th)) / G)).toBeLessThan(5e-10);
+    expect(Math.abs(r.flightTimeS - T)).toBeLessThan(5e-10);
+    expect(Math.abs(r.apexHeightM - (vy * vy) / (2 * G))).toBeLessThan(5e-10);
+    expect(Math.abs(r.apexTimeS - T / 2)).toBeLessThan(5e-10);
+    expect(Math.abs(r.landingVyMps + vy)).toBeLessThan(5e-10);
+  });
+});
