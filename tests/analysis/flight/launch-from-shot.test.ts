@@ -25,4 +25,33 @@ describe('launchFromShot', () => {
     expect(launchFromShot({ ballSpeed: 0, launchAngle: 15, spinRate: 5000 })).toBeNull();
     expect(launchFromShot({ ballSpeed: Number.NaN, launchAngle: 15, spinRate: 5000 })).toBeNull();
   });
+  // ECMAScript Math.atan2 (ECMA-262, 2024, §21.3.2.9) follows IEEE 754: atan2(+0, −0) = +π and
+  // atan2(−0, −0) = −π, so a spin pair written "-0" must not be read as a ball spun backwards.
+  it('launchFromShot with pure side spin puts the axis at 90° and a zero pair at 0° whatever the signs', () => {
+    expect(launchFromShot({ ballSpeed: 60, launchAngle: 15, backSpin: 0, sideSpin: 500 })!.launch.spinAxisDeg).toBeCloseTo(90, 12);
+    expect(launchFromShot({ ballSpeed: 60, launchAngle: 15, backSpin: 0, sideSpin: -500 })!.launch.spinAxisDeg).toBeCloseTo(-90, 12);
+    for (const [backSpin, sideSpin] of [[-0, 0], [-0, -0], [0, -0], [0, 0]]) {
+      const shot = launchFromShot({ ballSpeed: 60, launchAngle: 15, backSpin, sideSpin })!;
+      expect(Math.abs(shot.launch.spinAxisDeg)).toBe(0);
+      expect(shot.launch.spinRateRpm).toBe(0);
+      expect(shot.sideKnown).toBe(false);
+    }
+  });
+  it('launchFromShot refuses a negative spin rate and takes a spin rate of zero', () => {
+    expect(launchFromShot({ ballSpeed: 60, launchAngle: 15, spinRate: -1 })).toBeNull();
+    expect(launchFromShot({ ballSpeed: 60, launchAngle: 15, spinRate: -1, backSpin: 2000 })).toBeNull();
+    expect(launchFromShot({ ballSpeed: 60, launchAngle: 15, spinRate: 0 })!.launch.spinRateRpm).toBe(0);
+    expect(launchFromShot({ ballSpeed: 60, launchAngle: 15, spinRate: Number.POSITIVE_INFINITY, backSpin: 2000 })!.launch.spinRateRpm).toBe(2000);
+  });
+  it('launchFromShot with back spin alone takes it as the spin rate with the axis at 0°', () => {
+    const shot = launchFromShot({ ballSpeed: 60, launchAngle: 15, backSpin: 2400, spinAxis: Number.NaN, launchDirection: -2 })!;
+    expect(shot.launch.spinRateRpm).toBe(2400);
+    expect(shot.launch.spinAxisDeg).toBe(0);
+    expect(shot.sideKnown).toBe(false);
+  });
+  it('launchFromShot with back spin, an unusable side spin and a direction keeps the side unknown', () => {
+    const shot = launchFromShot({ ballSpeed: 60, launchAngle: 15, backSpin: 2400, sideSpin: Number.NaN, launchDirection: 1 })!;
+    expect(shot.launch.spinRateRpm).toBe(2400);
+    expect(shot.sideKnown).toBe(false);
+  });
 });
