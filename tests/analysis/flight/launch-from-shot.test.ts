@@ -30,7 +30,8 @@ describe('launchFromShot', () => {
   it('launchFromShot with pure side spin puts the axis at 90° and a zero pair at 0° whatever the signs', () => {
     expect(launchFromShot({ ballSpeed: 60, launchAngle: 15, backSpin: 0, sideSpin: 500 })!.launch.spinAxisDeg).toBeCloseTo(90, 12);
     expect(launchFromShot({ ballSpeed: 60, launchAngle: 15, backSpin: 0, sideSpin: -500 })!.launch.spinAxisDeg).toBeCloseTo(-90, 12);
-    for (const [backSpin, sideSpin] of [[-0, 0], [-0, -0], [0, -0], [0, 0]]) {
+    const zeroPairs: [number, number][] = [[-0, 0], [-0, -0], [0, -0], [0, 0]];
+    for (const [backSpin, sideSpin] of zeroPairs) {
       const shot = launchFromShot({ ballSpeed: 60, launchAngle: 15, backSpin, sideSpin })!;
       expect(Math.abs(shot.launch.spinAxisDeg)).toBe(0);
       expect(shot.launch.spinRateRpm).toBe(0);
