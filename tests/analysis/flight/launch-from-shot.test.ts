@@ -33,7 +33,7 @@ describe('launchFromShot', () => {
     const zeroPairs: [number, number][] = [[-0, 0], [-0, -0], [0, -0], [0, 0]];
     for (const [backSpin, sideSpin] of zeroPairs) {
       const shot = launchFromShot({ ballSpeed: 60, launchAngle: 15, backSpin, sideSpin })!;
-      expect(Math.abs(shot.launch.spinAxisDeg)).toBe(0);
+      expect(Math.abs(shot.launch.spinAxisDeg ?? Number.NaN)).toBe(0);
       expect(shot.launch.spinRateRpm).toBe(0);
       expect(shot.sideKnown).toBe(false);
     }
