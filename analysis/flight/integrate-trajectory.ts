@@ -1,4 +1,5 @@
 import type { ForceModel } from './force-model';
+import { hermite, hermiteRoot } from './hermite';
 
 /** The start of a flight: at the origin (launch height 0) with this velocity and spin. */
 export interface TrajectoryStart {
@@ -46,40 +47,6 @@ export interface TrajectoryResult {
 
 const DEFAULT_STEP_S = 0.2;
 const DEFAULT_MAX_TIME_S = 60;
-
-/** Cubic Hermite value on [0, h] from end values p0, p1 and slopes m0, m1, at s = t/h. */
-function hermite(p0: number, m0: number, p1: number, m1: number, h: number, s: number): number {
-  const s2 = s * s;
-  const s3 = s2 * s;
-  return (2 * s3 - 3 * s2 + 1) * p0 + (s3 - 2 * s2 + s) * h * m0 + (-2 * s3 + 3 * s2) * p1 + (s3 - s2) * h * m1;
-}
-
-/** Derivative with respect to t of the Hermite cubic above. */
-function hermiteSlope(p0: number, m0: number, p1: number, m1: number, h: number, s: number): number {
-  const s2 = s * s;
-  return ((6 * s2 - 6 * s) * p0 + (6 * s2 - 6 * s) * -p1) / h + (3 * s2 - 4 * s + 1) * m0 + (3 * s2 - 2 * s) * m1;
-}
-
-/**
- * Root in [0, 1] of a cubic Hermite segment that changes sign from f(0) > 0 to f(1) ≤ 0: a few
- * Newton steps safeguarded by bisection.
- */
-function hermiteRoot(p0: number, m0: number, p1: number, m1: number, h: number): number {
-  let lo = 0;
-  let hi = 1;
-  let s = p0 / (p0 - p1);
-  for (let i = 0; i < 30; i++) {
-    const f = hermite(p0, m0, p1, m1, h, s);
-    if (f > 0) lo = s;
-    else hi = s;
-    const slope = hermiteSlope(p0, m0, p1, m1, h, s) * h;
-    let next = slope !== 0 ? s - f / slope : (lo + hi) / 2;
-    if (!(next > lo && next < hi)) next = (lo + hi) / 2;
-    if (Math.abs(next - s) < 1e-12) return next;
-    s = next;
-  }
-  return s;
-}
 
 /**
  * Integrate a point mass from launch height until it comes back down to it, with classical

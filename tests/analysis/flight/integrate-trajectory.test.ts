@@ -220,9 +220,40 @@ describe('integrateTrajectory', () => {
     const result = integrateTrajectory(vacuum, start(50, -3));
     expect(result.xM).toBe(0);
     expect(result.flightTimeS).toBe(0);
+    for (const angle of [-3, 0]) {
+      const still = integrateTrajectory(vacuum, start(50, angle), { samplePath: true });
+      expect(still.path).toEqual([{ timeS: 0, xM: 0, yM: 0, zM: 0 }]);
+      expect(still.apexHeightM).toBe(0);
+      expect(still.landingVyMps).toBe(start(50, angle).vyMps);
+    }
   });
   it('integrateTrajectory with a step that is not positive throws', () => {
     expect(() => integrateTrajectory(vacuum, start(50, 20), { stepS: 0 })).toThrow(RangeError);
+  });
+  // y = 3t − 4t² (a constant 8 m/s² down, 3 m/s up) with a 0.375 s step: every number of RK4 is
+  // a short binary fraction (h/6 = 1/16), so the apex falls exactly on the end of the first step
+  // (0.5625 m at 0.375 s) and the landing exactly on the end of the second (0.75 s). Each must be
+  // found once, at the step's end, and the landing must not repeat the point before it.
+  const binary: ForceModel = {
+    derivative(_h, _vx, _vy, _vz, _spin, out) {
+      out[0] = 0;
+      out[1] = -8;
+      out[2] = 0;
+      out[3] = 0;
+    },
+  };
+  it('integrateTrajectory with the apex and the landing exactly on step ends finds each once', () => {
+    const r = integrateTrajectory(binary, { vxMps: 2, vyMps: 3, vzMps: 0 }, { stepS: 0.375, samplePath: true });
+    expect(r.apexHeightM).toBe(0.5625);
+    expect(r.apexTimeS).toBe(0.375);
+    expect(r.flightTimeS).toBe(0.75);
+    expect(r.xM).toBe(1.5);
+    expect(r.landingVyMps).toBe(-3);
+    expect(r.path!.map((p) => p.timeS)).toEqual([0, 0.375, 0.75]);
+  });
+  it('integrateTrajectory still in the air when the time limit ends a step throws; one step more lands', () => {
+    expect(() => integrateTrajectory(binary, { vxMps: 2, vyMps: 3, vzMps: 0 }, { stepS: 0.375, maxTimeS: 0.375 })).toThrow(/not landed after 0.375 s/);
+    expect(integrateTrajectory(binary, { vxMps: 2, vyMps: 3, vzMps: 0 }, { stepS: 0.375, maxTimeS: 0.75 }).flightTimeS).toBe(0.75);
   });
   it('integrateTrajectory that never comes down throws', () => {
     const hover: ForceModel = { derivative: (_h, _a, _b, _c, _d, out) => out.fill(0) };
