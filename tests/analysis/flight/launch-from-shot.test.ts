@@ -38,6 +38,10 @@ describe('launchFromShot', () => {
       expect(shot.sideKnown).toBe(false);
     }
   });
+  it('launchFromShot with back spin below zero (top spin) and no side spin turns the axis right round, to 180°', () => {
+    expect(launchFromShot({ ballSpeed: 60, launchAngle: 15, backSpin: -1500, sideSpin: 0 })!.launch.spinAxisDeg).toBeCloseTo(180, 12);
+    expect(launchFromShot({ ballSpeed: 60, launchAngle: 15, backSpin: -1500, sideSpin: 0 })!.launch.spinRateRpm).toBe(1500);
+  });
   it('launchFromShot refuses a negative spin rate and takes a spin rate of zero', () => {
     expect(launchFromShot({ ballSpeed: 60, launchAngle: 15, spinRate: -1 })).toBeNull();
     expect(launchFromShot({ ballSpeed: 60, launchAngle: 15, spinRate: -1, backSpin: 2000 })).toBeNull();

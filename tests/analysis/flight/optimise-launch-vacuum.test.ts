@@ -102,4 +102,12 @@ describe('optimiseLaunch without air (closed-form projectile)', () => {
     expect(r.window.clipped).toBe(true);
     expect(r.window.launchRangeDeg[1]).toBe(44);
   });
+
+  it('optimiseLaunch without air for total counts the run: its value is the total, beyond the carry', () => {
+    const r = optimiseLaunch(V, {}, { ...fixedSpin, objective: 'total' });
+    expect(r.objective).toBe('total');
+    expect(r.best.valueM).toBe(r.best.totalM);
+    expect(r.best.totalM).toBeGreaterThan(r.best.carryM);
+    expect(r.window.thresholdM).toBeCloseTo(0.99 * r.best.totalM, 9);
+  });
 });

@@ -3,8 +3,11 @@ import { launchWindowForClub, optimiseLaunch, simulateFlight, smitsSmithDragLyuL
 const MPH = 0.44704; // NIST SP 811 (2008), Appendix B
 
 describe('optimiseLaunch', () => {
-  const result = optimiseLaunch(70);
+  // Worked out inside each test, not once for the block: mutation testing runs only the tests
+  // that reached a line, and work done while the file loads reaches it in none of them.
+  const at70 = () => optimiseLaunch(70);
   it('optimiseLaunch at 70 m/s finds a best launch no grid point beats, inside the range', () => {
+    const result = at70();
     for (const row of result.grid.valueM) for (const v of row) expect(result.best.carryM).toBeGreaterThanOrEqual(v);
     expect(result.bestOnEdge).toBe(false);
     expect(result.feasible).toBe(true);
@@ -12,6 +15,7 @@ describe('optimiseLaunch', () => {
     expect(again.carryM).toBeCloseTo(result.best.carryM, 10);
   });
   it('optimiseLaunch window holds the best launch and exactly the grid launches within 1 % of it', () => {
+    const result = at70();
     const { window, grid, best } = result;
     expect(window.thresholdM).toBeCloseTo(best.carryM * 0.99, 10);
     expect(best.launchAngleDeg).toBeGreaterThanOrEqual(window.launchRangeDeg[0]);
@@ -27,6 +31,7 @@ describe('optimiseLaunch', () => {
     });
   });
   it('optimiseLaunch window is closed by tips beyond its first and last rows, not cut flat at the grid', () => {
+    const result = at70();
     const { rows, polygon, clipped } = result.window;
     expect(clipped).toBe(false);
     expect(polygon).toHaveLength(rows.length * 2 + 2);
@@ -80,6 +85,33 @@ describe('optimiseLaunch', () => {
     expect(() => optimiseLaunch(70, {}, { launchRangeDeg: [20, 10] })).toThrow(RangeError);
     expect(() => optimiseLaunch(70, {}, { spinStepRpm: 0 })).toThrow(RangeError);
     expect(() => optimiseLaunch(70, {}, { minDescentDeg: 95 })).toThrow(RangeError);
+  });
+  // The limits the search states: a launch angle strictly between 0° and 90°, a spin rate ≥ 0, a
+  // window share strictly between 0 and 100 %, a descent floor strictly between 0° and 90°, at
+  // most 2001 points per grid axis; each refused value is named.
+  it('optimiseLaunch refuses each value outside its stated limits, naming it, and takes the limits’ insides', () => {
+    const refused: [Parameters<typeof optimiseLaunch>[2], string][] = [
+      [{ launchRangeDeg: [0, 44] }, 'launch range [0, 44]° is not valid'],
+      [{ launchRangeDeg: [2, 90] }, 'launch range [2, 90]° is not valid'],
+      [{ launchRangeDeg: [2, Number.NaN] }, 'launch angle range [2, NaN] is not valid'],
+      [{ spinRangeRpm: [0, Number.POSITIVE_INFINITY] }, 'spin rate range [0, Infinity] is not valid'],
+      [{ launchRangeDeg: [Number.NaN, 44] }, 'launch angle range [NaN, 44] is not valid'],
+      [{ spinRangeRpm: [-100, 3000] }, 'spin rate -100 rpm is negative'],
+      [{ spinRangeRpm: [3000, 2000] }, 'spin rate range [3000, 2000] is not valid'],
+      [{ withinPct: 0 }, 'window of 0 % is not valid'],
+      [{ withinPct: 100 }, 'window of 100 % is not valid'],
+      [{ minDescentDeg: 0 }, 'descent floor 0° is not valid'],
+      [{ minDescentDeg: 90 }, 'descent floor 90° is not valid'],
+      [{ objective: 'apex' as never }, 'objective "apex" is not carry or total'],
+      [{ launchRangeDeg: [11, 13], launchStepDeg: 0.0005, spinRangeRpm: [3000, 3000] }, 'launch angle grid of 4001 points is too fine'],
+      [{ spinStepRpm: -5 }, 'spin rate step -5 is not positive'],
+    ];
+    for (const [options, message] of refused) expect(() => optimiseLaunch(70, {}, options)).toThrow(message);
+    expect(() => optimiseLaunch(Number.POSITIVE_INFINITY)).toThrow('ball speed Infinity m/s is not positive');
+    const edges = optimiseLaunch(70, {}, { launchRangeDeg: [1, 89], spinRangeRpm: [0, 0], withinPct: 99, minDescentDeg: 89.9 });
+    expect(edges.window.spinRangeRpm).toEqual([0, 0]);
+    // A range one coarse step wide is searched whole on the fine grid: 2° at 0.001° is 2001 points, taken.
+    expect(optimiseLaunch(70, {}, { launchRangeDeg: [11, 13], launchStepDeg: 0.001, spinRangeRpm: [3000, 3000] }).grid.launchAnglesDeg).toHaveLength(2001);
   });
 });
 
