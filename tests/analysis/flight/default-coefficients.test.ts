@@ -54,5 +54,6 @@ describe('defaultCoefficients', () => {
     expect(Object.keys(COEFFICIENT_MODELS)).toHaveLength(4);
     expect(() => coefficientModel('toString')).toThrow(RangeError);
     expect(() => coefficientModel('nope')).toThrow(/known: modern-ball/);
+    expect(() => coefficientModel('nope')).toThrow(`no coefficient model "nope"; known: ${Object.keys(COEFFICIENT_MODELS).join(', ')}`);
   });
 });

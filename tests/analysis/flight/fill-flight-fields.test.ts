@@ -35,6 +35,13 @@ describe('fillFlightFields', () => {
     expect(values.total).toBeCloseTo(250 + flight.rollM, 10);
     expect(flight.rollM).toBeGreaterThan(simulateFlight({ ballSpeedMps: 74.65, launchAngleDeg: 10.9, spinRateRpm: 2686 }, { firmness: 'soft' }).rollM);
   });
+  it('fillFlightFields with a measured carry fills the other missing fields from the model, not from that carry', () => {
+    const { values } = fillFlightFields({ ...launch, carry: 250 });
+    const flight = simulateFlight({ ballSpeedMps: 74.65, launchAngleDeg: 10.9, spinRateRpm: 2686 });
+    expect(values.apexHeight).toBe(flight.apexHeightM);
+    expect(values.descentAngle).toBe(flight.descentAngleDeg);
+    expect(values.flightTime).toBe(flight.flightTimeS);
+  });
   it('fillFlightFields in thinner air fills a longer carry', () => {
     expect(fillFlightFields(launch, { altitudeM: 1800 }).values.carry!).toBeGreaterThan(fillFlightFields(launch).values.carry!);
   });
@@ -58,5 +65,10 @@ describe('fillFlightFields below full-swing speeds', () => {
   });
   it('fillFlightFields for a ball launched at or below the ground plane fills nothing', () => {
     expect(fillFlightFields({ ballSpeed: 40, launchAngle: -1, spinRate: 3000 }).derived).toEqual([]);
+    expect(fillFlightFields({ ballSpeed: 40, launchAngle: 0, spinRate: 3000 }).derived).toEqual([]);
+  });
+  it('fillFlightFields fills from exactly 15 m/s and not below it', () => {
+    expect(fillFlightFields({ ballSpeed: 15, launchAngle: 20, spinRate: 3000 }).derived).toContain('carry');
+    expect(fillFlightFields({ ballSpeed: 14.999, launchAngle: 20, spinRate: 3000 }).derived).toEqual([]);
   });
 });

@@ -41,6 +41,19 @@ describe('hermiteRoot', () => {
     const root = hermiteRoot(0.2, 5, -1, -0.2, 1);
     expect(Math.abs(root - lo)).toBeLessThan(1e-12);
   });
+  // p0 = 1, m0 = −3.5, p1 = −0.25, m1 = 1.25 is 0.25s³ + 2s² − 3.5s + 1: one root in the step near
+  // 0.366, another just past its end near 1.150, where an unguarded Newton step heads.
+  it('hermiteRoot keeps to the step where Newton would run past its end to the next root', () => {
+    const f = (s: number) => ((0.25 * s + 2) * s - 3.5) * s + 1;
+    let lo = 0;
+    let hi = 1;
+    for (let i = 0; i < 200; i++) {
+      const mid = (lo + hi) / 2;
+      if (f(mid) > 0) lo = mid;
+      else hi = mid;
+    }
+    expect(Math.abs(hermiteRoot(1, -3.5, -0.25, 1.25, 1) - lo)).toBeLessThan(1e-12);
+  });
   it('hermiteRoot of a straight segment is the secant’s crossing', () => {
     // p0 = 3, p1 = −1 with the slope of the chord (−4) at both ends is the line 3 − 4s: root 3/4.
     expect(hermiteRoot(3, -4, -1, -4, 1)).toBe(0.75);

@@ -44,4 +44,7 @@ describe('lyuDragCoefficient', () => {
   it('lyuCoefficients drag ignores spin ratio', () => {
     expect(lyuCoefficients.dragCoefficient(0.3, 1.5e5)).toBe(lyuCoefficients.dragCoefficient(0, 1.5e5));
   });
+  it('lyuLiftCoefficient takes a spin ratio below zero as no lift', () => {
+    expect(lyuLiftCoefficient(-0.1)).toBe(0);
+  });
 });

@@ -61,4 +61,47 @@ describe('normaliseShot', () => {
     expect(result.derived).toEqual([]);
     expect(result.normalised).toEqual([]);
   });
+
+  // The approach stated in normalise-shot.ts applied to the model itself: a shot whose measured
+  // values are exactly the model's flight in the bay must come out as the model's flight on the
+  // course, every field, each listed once.
+  it('normaliseShot of the model’s own bay flight gives the model’s course flight, each field once', () => {
+    const bayFlight = simulateFlight(modelLaunch, bay);
+    const courseFlight = simulateFlight(modelLaunch, course);
+    const measured = {
+      ...launch, carry: bayFlight.carryM, total: bayFlight.totalM, offline: bayFlight.offlineM,
+      apexHeight: bayFlight.apexHeightM, descentAngle: bayFlight.descentAngleDeg, flightTime: bayFlight.flightTimeS,
+    };
+    const { values, derived, normalised } = normaliseShot(measured, bay, course);
+    expect(values.carry).toBeCloseTo(courseFlight.carryM, 9);
+    expect(values.total).toBeCloseTo(courseFlight.totalM, 9);
+    expect(values.offline).toBeCloseTo(courseFlight.offlineM, 9);
+    expect(values.apexHeight).toBeCloseTo(courseFlight.apexHeightM, 9);
+    expect(values.descentAngle).toBeCloseTo(courseFlight.descentAngleDeg, 9);
+    expect(values.flightTime).toBeCloseTo(courseFlight.flightTimeS, 9);
+    expect(values.ballSpeed).toBe(74.65);
+    expect(values.spinAxis).toBe(3);
+    expect(derived).toEqual([]);
+    expect(normalised).toEqual(['carry', 'offline', 'apexHeight', 'descentAngle', 'flightTime', 'total']);
+  });
+  it('normaliseShot with a measured carry derives the missing fields from the model on the course', () => {
+    const courseFlight = simulateFlight(modelLaunch, course);
+    const { values, derived } = normaliseShot({ ...launch, carry: 230 }, bay, course);
+    expect(derived).toEqual(['total', 'offline', 'apexHeight', 'descentAngle', 'flightTime']);
+    expect(values.total).toBeCloseTo(values.carry! + courseFlight.rollM, 10);
+    expect(values.offline).toBe(courseFlight.offlineM);
+    expect(values.apexHeight).toBe(courseFlight.apexHeightM);
+    const { derived: withoutSide } = normaliseShot({ ballSpeed: 74.65, launchAngle: 10.9, spinRate: 2686, carry: 230 }, bay, course);
+    expect(withoutSide).toEqual(['total', 'apexHeight', 'descentAngle', 'flightTime']);
+  });
+  it('normaliseShot to the same conditions leaves a measured total as it was and does not list it', () => {
+    const { values, normalised } = normaliseShot({ ...launch, carry: 230, total: 255 }, bay, bay);
+    expect(values.total).toBe(255);
+    expect(normalised).not.toContain('total');
+  });
+  it('normaliseShot of a ball launched downward keeps its measured carry: the model has no flight to scale by', () => {
+    const { values, normalised } = normaliseShot({ ballSpeed: 30, launchAngle: -3, spinRate: 2000, carry: 12 }, bay, course);
+    expect(values.carry).toBe(12);
+    expect(normalised).not.toContain('carry');
+  });
 });

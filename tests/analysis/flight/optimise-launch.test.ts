@@ -127,6 +127,15 @@ describe('launchWindowForClub', () => {
     expect(clubWindowAim('wedge')).toBeNull();
     expect(clubWindowAim('putter')).toBeNull();
   });
+  it('launchWindowForClub aims a driver at total over a 35° floor and a hybrid at carry over its own floor, with the caller’s grid', () => {
+    const driver = launchWindowForClub('driver', 70, {}, { launchStepDeg: 1, spinStepRpm: 500 })!;
+    expect([driver.objective, driver.minDescentDeg]).toEqual(['total', 35]);
+    expect(driver.best.valueM).toBe(driver.best.totalM);
+    expect(driver.grid.launchAnglesDeg[1] - driver.grid.launchAnglesDeg[0]).toBeCloseTo(1, 12);
+    const hybrid = launchWindowForClub('hybrid', 60, {}, { launchStepDeg: 1, spinStepRpm: 500, descentFloorDeg: 42 })!;
+    expect([hybrid.objective, hybrid.minDescentDeg]).toEqual(['carry', 42]);
+    expect(hybrid.best.descentAngleDeg).toBeGreaterThanOrEqual(42);
+  });
   it('launchWindowForClub of a wedge gives no window', () => {
     expect(launchWindowForClub('wedge', 40)).toBeNull();
   });

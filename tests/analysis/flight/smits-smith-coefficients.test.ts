@@ -18,4 +18,9 @@ describe('smitsSmithCoefficients', () => {
     expect(smitsSmithCoefficients.dragCoefficient(0, 1.5e5)).toBe(0.24);
     expect(smitsSmithCoefficients.liftCoefficient(0, 1.5e5)).toBe(0);
   });
+  // The fits are for S ≥ 0 (Smits & Smith 1994): a spin ratio below zero is taken as none.
+  it('smitsSmith coefficients take a spin ratio below zero as no spin', () => {
+    expect(smitsSmithDragCoefficient(-0.1)).toBe(0.24);
+    expect(smitsSmithLiftCoefficient(-0.1)).toBe(0);
+  });
 });
