@@ -19,6 +19,18 @@ describe('hermite', () => {
   });
 });
 
+/** The root in [0, 1] of f, from f(0) > 0 to f(1) ≤ 0, by 200 bisections: the reference here. */
+function bisect(f: (s: number) => number): number {
+  let lo = 0;
+  let hi = 1;
+  for (let i = 0; i < 200; i++) {
+    const mid = (lo + hi) / 2;
+    if (f(mid) > 0) lo = mid;
+    else hi = mid;
+  }
+  return lo;
+}
+
 describe('hermiteRoot', () => {
   // With p0 = 1, p1 = −1 and flat ends the segment is 4s³ − 6s² + 1 = (2s − 1)(2s² − 2s − 1): roots
   // 1/2 and (1 ± √3)/2; only 1/2 lies in the step.
@@ -31,28 +43,13 @@ describe('hermiteRoot', () => {
   // the bracket must hold it. The reference root is bisected here on the polynomial itself.
   it('hermiteRoot stays in the step where plain Newton would leave it, and places the root to 1e-12', () => {
     const f = (s: number) => ((7.2 * s - 13.4) * s + 5) * s + 0.2;
-    let lo = 0;
-    let hi = 1;
-    for (let i = 0; i < 200; i++) {
-      const mid = (lo + hi) / 2;
-      if (f(mid) > 0) lo = mid;
-      else hi = mid;
-    }
-    const root = hermiteRoot(0.2, 5, -1, -0.2, 1);
-    expect(Math.abs(root - lo)).toBeLessThan(1e-12);
+    expect(Math.abs(hermiteRoot(0.2, 5, -1, -0.2, 1) - bisect(f))).toBeLessThan(1e-12);
   });
   // p0 = 1, m0 = −3.5, p1 = −0.25, m1 = 1.25 is 0.25s³ + 2s² − 3.5s + 1: one root in the step near
   // 0.366, another just past its end near 1.150, where an unguarded Newton step heads.
   it('hermiteRoot keeps to the step where Newton would run past its end to the next root', () => {
     const f = (s: number) => ((0.25 * s + 2) * s - 3.5) * s + 1;
-    let lo = 0;
-    let hi = 1;
-    for (let i = 0; i < 200; i++) {
-      const mid = (lo + hi) / 2;
-      if (f(mid) > 0) lo = mid;
-      else hi = mid;
-    }
-    expect(Math.abs(hermiteRoot(1, -3.5, -0.25, 1.25, 1) - lo)).toBeLessThan(1e-12);
+    expect(Math.abs(hermiteRoot(1, -3.5, -0.25, 1.25, 1) - bisect(f))).toBeLessThan(1e-12);
   });
   it('hermiteRoot of a straight segment is the secant’s crossing', () => {
     // p0 = 3, p1 = −1 with the slope of the chord (−4) at both ends is the line 3 − 4s: root 3/4.
