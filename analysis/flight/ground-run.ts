@@ -69,7 +69,8 @@ export function craterAngleDeg(speedMps: number, angleDeg: number): number {
 
 /**
  * One bounce (Penner 2002): a rigid sphere (I = 2/5·m·r²) meets the turf surface tilted up toward
- * it by the crater angle; the normal speed rebounds with Penner's e; Coulomb friction μ acts
+ * it by the crater angle (a ball coming straight down makes a level crater); the normal speed
+ * rebounds with Penner's e; Coulomb friction μ acts
  * along the surface, either sliding throughout (impulse μ(1 + e)|vn|) or bringing the contact
  * point to rest (the ball leaves rolling: vt' = (5·vt − 2·r·ω)/7 in the surface's frame).
  * Returns the velocity and spin as the ball leaves the ground. O(1).
@@ -80,7 +81,7 @@ export function turfBounce(landing: GroundLanding, ground: GroundParameters): Gr
   const r = BALL_RADIUS_M;
   const speed = Math.hypot(vh, vv);
   const angleDeg = Math.atan2(-vv, Math.abs(vh)) / RAD_PER_DEG;
-  const tilt = ground.craterScale * craterAngleDeg(speed, angleDeg) * RAD_PER_DEG * (vh < 0 ? -1 : 1);
+  const tilt = ground.craterScale * craterAngleDeg(speed, angleDeg) * RAD_PER_DEG * Math.sign(vh);
   const c = Math.cos(tilt);
   const s = Math.sin(tilt);
   // Frame of the tilted surface: tangent t = (c, s), normal n = (−s, c).

@@ -8,7 +8,7 @@ const penner = (vn: number) => (Math.abs(vn) > 20 ? 0.12 : 0.51 - 0.0375 * Math.
 /** Penner's (2002) crater tilt, 15.4°·(v/18.6)·(θ/44.4), tilted up toward the ball, in radians. */
 function tilt(l: GroundLanding, scale: number): number {
   const angleDeg = Math.atan2(-l.verticalMps, Math.abs(l.horizontalMps)) / DEG;
-  return scale * 15.4 * (Math.hypot(l.horizontalMps, l.verticalMps) / 18.6) * (angleDeg / 44.4) * DEG * Math.sign(l.horizontalMps || 1);
+  return scale * 15.4 * (Math.hypot(l.horizontalMps, l.verticalMps) / 18.6) * (angleDeg / 44.4) * DEG * Math.sign(l.horizontalMps);
 }
 /** Velocity along (t) and out of (n) a surface tilted by `a`: t = (cos a, sin a), n = (−sin a, cos a). */
 const surface = (h: number, v: number, a: number) => ({ t: h * Math.cos(a) + v * Math.sin(a), n: -h * Math.sin(a) + v * Math.cos(a) });
@@ -57,6 +57,19 @@ describe('turfBounce on a cratered surface', () => {
   });
 });
 
+// A ball coming straight down has no forward side: the crater is level, so without spin it
+// bounces straight up, with back spin it kicks back and with top spin forward (Cross 2002).
+describe('turfBounce of a ball coming straight down', () => {
+  it('turfBounce of a vertical landing bounces straight up without spin, back with back spin, forward with top spin', () => {
+    const normal = GROUND_FIRMNESS_PARAMETERS.normal;
+    const still = turfBounce({ horizontalMps: 0, verticalMps: -12, backSpinRadS: 0 }, normal);
+    expect(still.horizontalMps).toBe(0);
+    expect(still.verticalMps).toBeCloseTo(12 * penner(12), 12);
+    expect(turfBounce({ horizontalMps: 0, verticalMps: -12, backSpinRadS: 400 }, normal).horizontalMps).toBeLessThan(0);
+    expect(turfBounce({ horizontalMps: 0, verticalMps: -12, backSpinRadS: -400 }, normal).horizontalMps).toBeGreaterThan(0);
+  });
+});
+
 // Between bounces the ball hops without air: a projectile that covers 2·vx·vy/g and comes down
 // with its vertical speed reversed (Halliday, Resnick & Walker, "Fundamentals of Physics", 10th ed.,
 // 2014, §4-6); once a bounce leaves slower than 0.5 m/s upward (the model's stated switch), it
@@ -90,6 +103,11 @@ describe('groundRun as bounces and a roll', () => {
     if (firmness !== 'soft') expect(bounces).toBeGreaterThan(1);
   });
 
+  // The stated bound, O(bounces) ≤ 12: a ball with heavy top spin on soft ground keeps being
+  // thrown up by its crater, and the run stops counting at twelve.
+  it('groundRun stops at twelve bounces', () => {
+    expect(groundRun({ horizontalMps: 8.5, verticalMps: -4.1, backSpinRadS: -1500 }, 'soft').bounces).toBe(12);
+  });
   it('groundRun names what it refuses', () => {
     expect(() => groundRun({ horizontalMps: 10, verticalMps: 0, backSpinRadS: 0 })).toThrow('vertical landing speed 0 m/s is not downward');
     expect(() => groundRun({ horizontalMps: 10, verticalMps: -3, backSpinRadS: Number.POSITIVE_INFINITY })).toThrow('landing values must be finite');

@@ -110,4 +110,42 @@ describe('optimiseLaunch without air (closed-form projectile)', () => {
     expect(r.best.totalM).toBeGreaterThan(r.best.carryM);
     expect(r.window.thresholdM).toBeCloseTo(0.99 * r.best.totalM, 9);
   });
+
+  it('optimiseLaunch without air ends its grids exactly on the range’s end, and takes a fixed spin without a step', () => {
+    // 2 + (26.1 − 2) is 26.100000000000005 in doubles: the last grid point must be the end itself.
+    const r = optimiseLaunch(V, {}, { model: noAir, launchRangeDeg: [2, 26.1], spinRangeRpm: [2500, 2500], spinStepRpm: 0 });
+    expect(r.best.launchAngleDeg).toBe(26.1);
+    expect(r.grid.launchAnglesDeg[r.grid.launchAnglesDeg.length - 1]).toBe(26.1);
+    expect(r.window.rows[r.window.rows.length - 1].launchAngleDeg).toBe(26.1);
+    expect(r.grid.spinRatesRpm).toEqual([2500]);
+    expect(r.window.clipped).toBe(true);
+  });
+
+  it('optimiseLaunch without air with a fixed launch and spin has a window of that one launch, never clipped', () => {
+    const r = optimiseLaunch(V, {}, { model: noAir, launchRangeDeg: [40, 40], spinRangeRpm: [2500, 2500] });
+    expect(r.best.launchAngleDeg).toBe(40);
+    expect(r.best.carryM).toBeCloseTo(range(40), 8);
+    expect(r.window.rows).toEqual([{ launchAngleDeg: 40, spinMinRpm: 2500, spinMaxRpm: 2500 }]);
+    expect(r.window.clipped).toBe(false);
+    expect(r.bestOnEdge).toBe(false);
+  });
+
+  it('optimiseLaunch without air gives the outline’s tips the spin of the row beside them', () => {
+    const r = optimiseLaunch(V, {}, fixedSpin);
+    const tips = [r.window.polygon[0], r.window.polygon[r.window.rows.length + 1]];
+    for (const tip of tips) expect(tip.spinRateRpm).toBe(2500);
+  });
+
+  // The best is "on the edge" when it lies within half a fine step (0.25°) of a range end: 45° is
+  // on the edge of [44.75, 60] and of [30, 45.25], not of [44, 60] or [30, 46].
+  it.each([
+    [[44.75, 60], true],
+    [[30, 45.25], true],
+    [[44, 60], false],
+    [[30, 46], false],
+  ] as const)('optimiseLaunch without air over %j says the best at 45° is on the edge: %s', (launchRangeDeg, onEdge) => {
+    const r = optimiseLaunch(V, {}, { ...fixedSpin, launchRangeDeg });
+    expect(r.best.launchAngleDeg).toBeCloseTo(45, 9);
+    expect(r.bestOnEdge).toBe(onEdge);
+  });
 });

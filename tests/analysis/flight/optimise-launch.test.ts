@@ -77,13 +77,51 @@ describe('optimiseLaunch', () => {
     const opts = { objective: 'total' as const, minDescentDeg: 35, launchStepDeg: 1, spinStepRpm: 250 };
     expect(optimiseLaunch(70, { firmness: 'firm' }, opts).best.totalM).toBeGreaterThan(optimiseLaunch(70, { firmness: 'soft' }, opts).best.totalM);
   });
-  it('optimiseLaunch with a narrow range reports a best launch on its edge', () => {
-    expect(optimiseLaunch(70, {}, { launchRangeDeg: [4, 8], spinRangeRpm: [2000, 4000] }).bestOnEdge).toBe(true);
+  it('optimiseLaunch with a narrow range reports a best launch on its edge, inside the ranges', () => {
+    const narrow = optimiseLaunch(70, {}, { launchRangeDeg: [4, 8], spinRangeRpm: [2000, 4000] });
+    expect(narrow.bestOnEdge).toBe(true);
+    expect(narrow.best.launchAngleDeg).toBeLessThanOrEqual(8);
+    expect(narrow.best.spinRateRpm).toBeLessThanOrEqual(4000);
+    expect(narrow.best.spinRateRpm).toBeGreaterThanOrEqual(2000);
+  });
+  // The window's definition: its edges are where the carry equals the threshold. Between two
+  // 100-rpm grid points the carry moves by about 1.3 m here, so an edge taken at a grid point
+  // instead of interpolated misses the threshold by up to that; interpolated, by centimetres.
+  // A spin range that cuts the window must clip it at the range, on that side only.
+  it.each([
+    [[2500, 6000], 'below'],
+    [[0, 2600], 'above'],
+  ] as const)('optimiseLaunch with spins %j cutting the window %s clips it there and interpolates the other edges', (spinRangeRpm, side) => {
+    const r = optimiseLaunch(70, {}, { spinRangeRpm, launchStepDeg: 1, spinStepRpm: 100 });
+    const [lo, hi] = spinRangeRpm;
+    expect(r.window.clipped).toBe(true);
+    expect(r.window.spinRangeRpm).toEqual([Math.min(...r.window.rows.map((row) => row.spinMinRpm)), Math.max(...r.window.rows.map((row) => row.spinMaxRpm))]);
+    if (side === 'below') {
+      expect(r.window.spinRangeRpm[0]).toBe(lo);
+      expect(r.window.spinRangeRpm[1]).toBeLessThan(hi - 1000);
+    } else {
+      expect(r.window.spinRangeRpm[1]).toBe(hi);
+      expect(r.window.spinRangeRpm[0]).toBeGreaterThan(lo + 1000);
+      expect(r.bestOnEdge).toBe(true);
+      expect(r.best.spinRateRpm).toBeLessThanOrEqual(hi);
+    }
+    let interior = 0;
+    for (const row of r.window.rows) {
+      expect(row.spinMinRpm).toBeGreaterThanOrEqual(lo);
+      expect(row.spinMaxRpm).toBeLessThanOrEqual(hi);
+      for (const spin of [row.spinMinRpm, row.spinMaxRpm]) {
+        if (spin === lo || spin === hi) continue;
+        interior += 1;
+        const carry = simulateFlight({ ballSpeedMps: 70, launchAngleDeg: row.launchAngleDeg, spinRateRpm: spin }).carryM;
+        expect(Math.abs(carry - r.window.thresholdM)).toBeLessThan(0.1);
+      }
+    }
+    expect(interior).toBeGreaterThan(5);
   });
   it('optimiseLaunch with a ball speed that is not positive, a reversed range or a bad floor throws', () => {
     expect(() => optimiseLaunch(0)).toThrow(RangeError);
     expect(() => optimiseLaunch(70, {}, { launchRangeDeg: [20, 10] })).toThrow(RangeError);
-    expect(() => optimiseLaunch(70, {}, { spinStepRpm: 0 })).toThrow(RangeError);
+    expect(() => optimiseLaunch(70, {}, { spinStepRpm: 0 })).toThrow('spin rate step 0 is not positive');
     expect(() => optimiseLaunch(70, {}, { minDescentDeg: 95 })).toThrow(RangeError);
   });
   // The limits the search states: a launch angle strictly between 0° and 90°, a spin rate ≥ 0, a
