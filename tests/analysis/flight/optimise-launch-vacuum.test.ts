@@ -1,15 +1,15 @@
-import { optimiseLaunch, STANDARD_GRAVITY_MPS2, type CoefficientModel } from '@/analysis/flight';
+import { optimiseLaunch, STANDARD_GRAVITY_MPS2 } from '@/analysis/flight';
+import { noAir, projectileRangeM } from '@/tests/support/no-air';
 
 // A ball without drag or lift flies the textbook projectile (e.g. Halliday, Resnick & Walker,
 // "Fundamentals of Physics", 10th ed., 2014, §4-6): over level ground its range is v²·sin 2θ/g,
 // greatest at θ = 45°, and it lands at the angle it was launched at. The optimiser searches with
 // the real flight code, so with this model its best launch, window edges and descent floor have
 // closed forms.
-const noAir: CoefficientModel = { name: 'no-air', source: 'gravity only', dragCoefficient: () => 0, liftCoefficient: () => 0 };
 const G = STANDARD_GRAVITY_MPS2;
 const DEG = Math.PI / 180;
 const V = 40;
-const range = (deg: number) => (V * V * Math.sin(2 * deg * DEG)) / G;
+const range = (deg: number) => projectileRangeM(V, deg);
 /** The lower launch angle whose range is `share` of the greatest (deg). */
 const lowEdge = (share: number) => Math.asin(share) / 2 / DEG;
 

@@ -1,6 +1,6 @@
-import { BALL_RADIUS_M, SPIN_DECAY_COEFFICIENT, STANDARD_GRAVITY_MPS2, simulateFlight, type CoefficientModel } from '@/analysis/flight';
+import { BALL_RADIUS_M, SPIN_DECAY_COEFFICIENT, STANDARD_GRAVITY_MPS2, simulateFlight } from '@/analysis/flight';
+import { noAir, projectileRangeM } from '@/tests/support/no-air';
 
-const noAir: CoefficientModel = { name: 'no-air', source: 'gravity only', dragCoefficient: () => 0, liftCoefficient: () => 0 };
 const G = STANDARD_GRAVITY_MPS2;
 const DEG = Math.PI / 180;
 
@@ -14,7 +14,7 @@ describe('simulateFlight without drag or lift (closed forms)', () => {
     const v = 40;
     const th = 30 * DEG;
     const f = simulateFlight({ ballSpeedMps: v, launchAngleDeg: 30, spinRateRpm: 3000 }, {}, { model: noAir });
-    expect(f.carryM).toBeCloseTo((v * v * Math.sin(2 * th)) / G, 8);
+    expect(f.carryM).toBeCloseTo(projectileRangeM(v, 30), 8);
     expect(f.offlineM).toBeCloseTo(0, 10);
     expect(f.apexHeightM).toBeCloseTo((v * Math.sin(th)) ** 2 / (2 * G), 8);
     expect(f.flightTimeS).toBeCloseTo((2 * v * Math.sin(th)) / G, 9);
